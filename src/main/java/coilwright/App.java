@@ -1,0 +1,7 @@
+package coilwright;
+
+public final class App {
+    public static void main(String[] args) {
+        System.out.println("coilwright");
+    }
+}
