@@ -38,7 +38,7 @@ public final class Checks {
     public Checks range(String field, double value, double min, double max) {
         String allowed = fmt(min) + " to " + fmt(max);
         if (finite(field, value, allowed) && !(value >= min && value <= max)) {
-            fail(field, value, "must be between " + allowed, allowed);
+            fail(field, value, "must be between " + fmt(min) + " and " + fmt(max), allowed);
         }
         return this;
     }
@@ -57,7 +57,7 @@ public final class Checks {
         if (value < min || value > max) {
             String allowed = min + " to " + max;
             errors.add(new FieldError(field, Long.toString(value),
-                    field + " = " + value + ": must be between " + allowed, allowed));
+                    field + " = " + value + ": must be between " + min + " and " + max, allowed));
         }
         return this;
     }

@@ -39,7 +39,7 @@ class CopperTest {
     @Test
     void rejects_temperature_outside_minus_50_to_250() {
         InvalidInputException e = assertThrows(InvalidInputException.class, () -> Copper.resistivityOhmM(300.0));
-        assertEquals("temperatureC = 300.0: must be between -50.0 to 250.0", e.getMessage());
+        assertEquals("temperatureC = 300.0: must be between -50.0 and 250.0", e.getMessage());
         assertThrows(InvalidInputException.class, () -> Copper.resistivityOhmM(-60.0));
     }
 

@@ -27,7 +27,7 @@ class PhaseWindingTest {
         InvalidInputException e = assertThrows(InvalidInputException.class,
                 () -> new PhaseWinding(0, 0, 0, Double.NaN, null));
         assertEquals(5, e.errors().size());
-        assertEquals("turnsPerCoil = 0: must be between 1 to 100000", e.errors().get(0).message());
+        assertEquals("turnsPerCoil = 0: must be between 1 and 100000", e.errors().get(0).message());
         assertEquals("meanTurnLengthM", e.errors().get(3).field());
         assertEquals("wire", e.errors().get(4).field());
     }

@@ -64,6 +64,6 @@ class WireCatalogueTest {
         InvalidInputException e = assertThrows(InvalidInputException.class,
                 () -> WireCatalogue.strandAlternatives(-1, 0));
         assertEquals(2, e.errors().size());
-        assertEquals("maxStrands = 0: must be between 1 to 40", e.errors().get(1).message());
+        assertEquals("maxStrands = 0: must be between 1 and 40", e.errors().get(1).message());
     }
 }

@@ -43,7 +43,7 @@ class WireSizeTest {
     @Test
     void rejects_awg_outside_4_to_40_naming_field_and_range() {
         InvalidInputException e = assertThrows(InvalidInputException.class, () -> WireSize.awgDiameterM(50));
-        assertEquals("awg = 50: must be between 4 to 40", e.errors().get(0).message());
+        assertEquals("awg = 50: must be between 4 and 40", e.errors().get(0).message());
         assertThrows(InvalidInputException.class, () -> WireSize.awgDiameterM(3));
     }
 
@@ -53,6 +53,6 @@ class WireSizeTest {
                 () -> WireSize.overallDiameterM(Double.NaN, 3));
         assertEquals(2, e.errors().size());
         assertEquals("bareDiameterM", e.errors().get(0).field());
-        assertEquals("insulationGrade = 3: must be between 1 to 2", e.errors().get(1).message());
+        assertEquals("insulationGrade = 3: must be between 1 and 2", e.errors().get(1).message());
     }
 }

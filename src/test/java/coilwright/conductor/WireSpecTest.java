@@ -44,7 +44,7 @@ class WireSpecTest {
     @Test
     void rejects_awg_out_of_range() {
         InvalidInputException e = assertThrows(InvalidInputException.class, () -> WireSpec.awg(50, 1));
-        assertEquals("awg = 50: must be between 4 to 40", e.getMessage());
+        assertEquals("awg = 50: must be between 4 and 40", e.getMessage());
     }
 
     @Test
@@ -68,7 +68,7 @@ class WireSpecTest {
                 () -> new WireSpec(WireGauge.AWG, 2, 0, 0, 0));
         List<String> fields = e.errors().stream().map(f -> f.field()).toList();
         assertEquals(List.of("awg", "insulationGrade", "strandsInHand"), fields);
-        assertEquals("strandsInHand = 0: must be between 1 to 40", e.errors().get(2).message());
+        assertEquals("strandsInHand = 0: must be between 1 and 40", e.errors().get(2).message());
     }
 
     @Test
