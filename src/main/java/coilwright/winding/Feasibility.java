@@ -7,7 +7,10 @@ import java.util.Locale;
 
 /**
  * The closed-form conditions for a balanced winding, checked before the layout so the refusal can give the
- * numbers (Bianchi and Dai Pre, 2006). The layout is checked numerically afterwards as well.
+ * numbers. Double layer: Q/(m*t) whole, t = gcd(Q, p) (Bianchi and Dai Pre, 2006). Single layer with an odd
+ * pitch: Q even and the star of the Q/2 coil phasors balanced, (Q/2)/(m*t') whole with t' = gcd(Q/2, p); with an
+ * even pitch the coil must span 180 electrical degrees and the slot star must meet the double-layer condition.
+ * The layout is checked numerically afterwards as well.
  */
 final class Feasibility {
     private Feasibility() {

@@ -108,8 +108,8 @@ public record Winding(WindingSpec spec, Fraction q, int periodicity, int lcmSlot
      * <p>
      * E_v is proportional to (v*f) * kw_v * ks_v * Phi_v, and the flux per pole of the v-th harmonic,
      * which has v times as many poles, is Phi_v = (2/pi) * B_v * (pole area / v). The factor v cancels,
-     * so E_v/E_1 = (kw_v * ks_v * B_v) / (kw_1 * ks_1 * B_1) (e.g. Hendershot and Miller, 2010, ch. on EMF
-     * harmonics; the same result in any machine-design text).
+     * so E_v/E_1 = (kw_v * ks_v * B_v) / (kw_1 * ks_1 * B_1): the usual EMF-harmonic relation of machine-design
+     * texts (derivation as given here).
      *
      * @param order                 odd harmonic order 1..13
      * @param fluxDensityHarmonicRatio B_v/B_1 of the rotor field at the coils, finite, &gt;= 0
