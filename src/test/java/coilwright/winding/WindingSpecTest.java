@@ -20,7 +20,7 @@ class WindingSpecTest {
     void zero_slots_is_refused_with_the_allowed_range() {
         FieldError e = onlyError(() -> new WindingSpec(0, 10, 3, Layers.DOUBLE, 0, 1, 0));
         assertEquals("slots", e.field());
-        assertEquals("slots = 0: must be between 2 to 400", e.message());
+        assertEquals("slots = 0: must be between 2 and 400", e.message());
     }
 
     @Test
