@@ -91,4 +91,12 @@ class TableCpTest {
         assertEquals(new TableCp(LAMBDA, CP), t);
         assertEquals(new TableCp(LAMBDA, CP).hashCode(), t.hashCode());
     }
+
+    @Test
+    void a_table_falling_from_its_first_point_peaks_there() {
+        TableCp t = new TableCp(new double[] {4, 6, 8, 10, 12}, new double[] {0.4, 0.3, 0.2, 0.1, 0.05});
+        assertEquals(4.0, t.optimumTipSpeedRatio(), 1e-6);
+        assertEquals(0.4, t.maxCp(), 1e-9);
+        assertEquals(12.0, t.runawayTipSpeedRatio(), 1e-12);
+    }
 }
