@@ -58,7 +58,7 @@ class ImpulseRunnerTest {
         InvalidInputException e = assertThrows(InvalidInputException.class, () -> ImpulseRunner.pelton(-3, 0.01, 7, 0.2));
         assertEquals("netHeadM", e.errors().get(0).field());
         assertEquals("jetCount", e.errors().get(1).field());
-        assertEquals("jetCount = 7: must be between 1 to 6", e.errors().get(1).message());
+        assertEquals("jetCount = 7: must be between 1 and 6", e.errors().get(1).message());
     }
 
     @Test
