@@ -29,7 +29,7 @@ class AirDensityTest {
     void rejects_altitude_above_the_troposphere_and_names_the_field() {
         InvalidInputException e = assertThrows(InvalidInputException.class, () -> AirDensity.isa(12_000, 15));
         assertEquals("altitudeM", e.errors().get(0).field());
-        assertTrue(e.getMessage().contains("-500.0 to 11000.0"), e.getMessage());
+        assertTrue(e.getMessage().contains("-500.0 and 11000.0"), e.getMessage());
     }
 
     @Test
