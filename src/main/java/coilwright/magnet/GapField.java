@@ -14,8 +14,8 @@ import java.util.List;
  * @param fundamentalAmplitude1dT  (4/pi) * gapFluxDensity1dT * sin(alpha_p pi/2), T
  * @param fundamentalAmplitude2dT  fundamental of the 2-D harmonic solution, T (the value used)
  * @param harmonicAmplitudes       2-D harmonics of odd order 1..13
- * @param peakFluxDensity2dT       2-D flux density at the pole centre (sum of odd harmonics up to
- *                                 {@link GapFieldCalculator#PEAK_MAX_ORDER}), T
+ * @param peakFluxDensity2dT       2-D flux density at the pole centre (sum of odd harmonics, at least up to
+ *                                 {@link GapFieldCalculator#PEAK_MAX_ORDER} and on until they are negligible), T
  * @param fluxPerPole1dWb          fundamental flux per pole from the 1-D model, Wb
  * @param fluxPerPoleWb            fundamental flux per pole from the 2-D model, Wb (the value used for EMF)
  * @param leakageRatio             fundamentalAmplitude2dT / fundamentalAmplitude1dT (at most about 1)

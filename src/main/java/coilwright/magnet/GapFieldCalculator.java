@@ -18,8 +18,11 @@ public final class GapFieldCalculator {
 
     /** Highest odd order reported in {@link GapField#harmonicAmplitudes()}. */
     public static final int REPORTED_MAX_ORDER = 13;
-    /** Highest odd order summed for the pole-centre peak; beyond it terms are below 1e-3 of Br for tau_p/g < 100. */
+    /** Lowest highest-order summed for the pole-centre peak (more are summed when the gap is small, see below). */
     public static final int PEAK_MAX_ORDER = 199;
+    /** The peak sum runs until k * d reaches this, d being the distance from the evaluation layer to the magnets:
+     *  the terms then carry a factor below exp(-30). */
+    private static final double PEAK_DECAY_EXPONENT = 30.0;
 
     private static final int GAUSS_POINTS = 5;
     private static final double INTEGRATION_RELATIVE_ACCURACY = 1e-10;
@@ -80,7 +83,7 @@ public final class GapFieldCalculator {
         double b11dT = HarmonicGapField.squareWaveFundamentalT(bg1dT, alpha);
         double lengthM = r.stackLengthM();
         double volumeM3 = r.magnetVolumeM3();
-        return new GapField(brT, tauM, alpha, kc, gEffM, bg1dT, b11dT, b1T, reported(bv), peak(bv),
+        return new GapField(brT, tauM, alpha, kc, gEffM, bg1dT, b11dT, b1T, reported(bv), peak(bv, tauM, gEffM),
                 2.0 / Math.PI * b11dT * tauM * lengthM, 2.0 / Math.PI * b1T * tauM * lengthM, b1T / b11dT,
                 volumeM3, volumeM3 * grade.material().densityKgPerM3(),
                 "normal flux density on the stator iron surface (Carter-scaled gap, curvature ignored)",
@@ -125,7 +128,8 @@ public final class GapFieldCalculator {
             warnings.add(String.format(Locale.ROOT, "pole-arc ratio %.2f at the magnet centre radius is low: most of "
                     + "each pole pitch carries no magnet, so the EMF is small and rich in harmonics", alphaC));
         }
-        return new GapField(brT, tauCM, alphaC, 1.0, gapM, bg1dT, b11dT, b1T, reported(bv), peak(bv),
+        return new GapField(brT, tauCM, alphaC, 1.0, gapM, bg1dT, b11dT, b1T, reported(bv),
+                peak(bv, tauCM, a.runningClearanceM()),
                 integrate(flux1d, a), integrate(flux2d, a), b1T / b11dT,
                 volumeM3, volumeM3 * grade.material().densityKgPerM3(),
                 "normal flux density averaged over the coil layer thickness, at the magnet centre radius; "
@@ -146,9 +150,13 @@ public final class GapFieldCalculator {
         return out;
     }
 
-    private static double peak(IntToDoubleFunction bv) {
+    /** Sum of the cosine coefficients at the pole centre; {@code decayLengthM} is the evaluation layer's
+     *  nearest distance to the magnet face, which sets how fast the series converges. */
+    private static double peak(IntToDoubleFunction bv, double polePitchM, double decayLengthM) {
+        double neededOrder = PEAK_DECAY_EXPONENT * polePitchM / (Math.PI * decayLengthM);
+        int maxOrder = (int) Math.min(2_000_001, Math.max(PEAK_MAX_ORDER, neededOrder));
         double sum = 0.0;
-        for (int v = 1; v <= PEAK_MAX_ORDER; v += 2) {
+        for (int v = 1; v <= maxOrder; v += 2) {
             sum += bv.applyAsDouble(v);
         }
         return sum;
