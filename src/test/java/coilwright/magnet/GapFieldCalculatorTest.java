@@ -109,12 +109,12 @@ class GapFieldCalculatorTest {
                 () -> GapFieldCalculator.solve(RadialSurfaceRotorTest.inner(), 7, 0, 500));
         String m = e.getMessage();
         assertTrue(m.contains("poles = 7: must be even"), m);
-        assertTrue(m.contains("slots = 0: must be between 1 to 2000"), m);
-        assertTrue(m.contains("magnetTempC = 500.0: must be between -60.0 to 300.0"), m);
+        assertTrue(m.contains("slots = 0: must be between 1 and 2000"), m);
+        assertTrue(m.contains("magnetTempC = 500.0: must be between -60.0 and 300.0"), m);
         InvalidInputException missing = assertThrows(InvalidInputException.class,
                 () -> GapFieldCalculator.solve(null, 0, 1, 20));
         assertTrue(missing.getMessage().contains("rotor is missing"), missing.getMessage());
-        assertTrue(missing.getMessage().contains("poles = 0: must be between 2 to 1000"), missing.getMessage());
+        assertTrue(missing.getMessage().contains("poles = 0: must be between 2 and 1000"), missing.getMessage());
     }
 
     @Test

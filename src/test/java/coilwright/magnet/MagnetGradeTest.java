@@ -40,7 +40,7 @@ class MagnetGradeTest {
     @Test
     void refuses_a_temperature_outside_the_model_range() {
         InvalidInputException e = assertThrows(InvalidInputException.class, () -> sample().remanenceAt(400));
-        assertTrue(e.getMessage().contains("magnetTempC = 400.0: must be between -60.0 to 300.0"), e.getMessage());
+        assertTrue(e.getMessage().contains("magnetTempC = 400.0: must be between -60.0 and 300.0"), e.getMessage());
         assertThrows(InvalidInputException.class, () -> sample().remanenceAt(Double.NaN));
     }
 
@@ -49,7 +49,7 @@ class MagnetGradeTest {
         InvalidInputException e = assertThrows(InvalidInputException.class, () -> new MagnetGrade(" ", null, 2.0,
                 0.001, 10, 0.9, 500, ""));
         assertEquals(8, e.errors().size(), e.getMessage());
-        assertTrue(e.getMessage().contains("remanenceT = 2.0: must be between 0.1 to 1.6"), e.getMessage());
+        assertTrue(e.getMessage().contains("remanenceT = 2.0: must be between 0.1 and 1.6"), e.getMessage());
         assertTrue(e.getMessage().contains("material is missing"), e.getMessage());
     }
 }
