@@ -44,7 +44,7 @@ class RadialSurfaceRotorTest {
         assertTrue(byField.get("gradeName").contains("unknown magnet grade; allowed: N35"));
         assertEquals("gapDiameterM = -1.0: must be between 0.01 and 5.0", byField.get("gapDiameterM"));
         assertEquals("stackLengthM = 0.0: must be between 0.002 and 2.0", byField.get("stackLengthM"));
-        assertEquals("airGapM = 1.0E-5: must be between 1.0E-4 to 0.05", byField.get("airGapM"));
+        assertEquals("airGapM = 1.0E-5: must be between 1.0E-4 and 0.05", byField.get("airGapM"));
         assertEquals("magnetThicknessM = NaN: must be a finite number", byField.get("magnetThicknessM"));
         assertEquals("poleArcRatio = 0.2: must be between 0.3 and 1.0", byField.get("poleArcRatio"));
         assertEquals("slotOpeningM = -0.001: must be between 0.0 and 0.1", byField.get("slotOpeningM"));
