@@ -6,6 +6,13 @@ import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
 
 import java.time.Instant;
+import java.util.ArrayList;
+import java.util.concurrent.CyclicBarrier;
+import java.util.concurrent.ExecutorService;
+import java.util.concurrent.Executors;
+import java.util.concurrent.Future;
+import java.util.concurrent.TimeUnit;
+import java.util.stream.IntStream;
 import java.util.HashSet;
 import java.util.List;
 import java.util.Optional;
@@ -267,6 +274,76 @@ abstract class DesignStoreContract {
         assertEquals(1, store.demos().size());
         SaveOutcome wide = store.create(new DraftRevision("v", "", "{}", "{}", longVersion, 1));
         assertEquals(longVersion, store.latest(wide.designId()).orElseThrow().toolVersion());
+    }
+
+    record Ack(SaveOutcome outcome, DraftRevision expected) {
+    }
+
+    @Test
+    void parallel_saves_and_revisions_are_all_kept_intact_with_unique_ids_and_gapless_numbers() throws Exception {
+        int threads = 8;
+        int createsPerThread = 12;
+        int revisionsPerThread = 12;
+        SaveOutcome shared = store.create(draft("shared", "", "{\"shared\":0}"));
+        String token = shared.editToken().orElseThrow();
+        DraftRevision race = draft("same content from every thread", "", "{\"race\":true}");
+        CyclicBarrier start = new CyclicBarrier(threads);
+        ExecutorService pool = Executors.newFixedThreadPool(threads);
+        List<Future<List<Ack>>> futures = new ArrayList<>();
+        for (int t = 0; t < threads; t++) {
+            int thread = t;
+            futures.add(pool.submit(() -> {
+                List<Ack> acks = new ArrayList<>();
+                start.await();
+                acks.add(new Ack(store.create(race), race));
+                for (int i = 0; i < Math.max(createsPerThread, revisionsPerThread); i++) {
+                    if (i < createsPerThread) {
+                        DraftRevision d = draft("thread " + thread + " design " + i, "ü " + i, "{\"t\":" + thread + ",\"i\":" + i + "}");
+                        acks.add(new Ack(store.create(d), d));
+                    }
+                    if (i < revisionsPerThread) {
+                        DraftRevision r = draft("revision by " + thread, "#" + i, "{\"rt\":" + thread + ",\"ri\":" + i + "}");
+                        acks.add(new Ack(store.addRevision(shared.designId(), token, r), r));
+                    }
+                }
+                return acks;
+            }));
+        }
+        pool.shutdown();
+        List<Ack> all = new ArrayList<>();
+        for (Future<List<Ack>> f : futures) {
+            all.addAll(f.get(180, TimeUnit.SECONDS));
+        }
+
+        List<Ack> raceAcks = all.stream().filter(a -> a.expected() == race).toList();
+        assertEquals(threads, raceAcks.size());
+        assertEquals(1, raceAcks.stream().filter(a -> a.outcome().created()).count(), "one of the racing creates stores it");
+        assertEquals(1, raceAcks.stream().filter(a -> a.outcome().editToken().isPresent()).count());
+        assertEquals(1, raceAcks.stream().map(a -> a.outcome().designId()).distinct().count());
+        assertEquals(1, store.history(raceAcks.get(0).outcome().designId()).size());
+
+        Set<String> revisionIds = new HashSet<>();
+        for (Ack a : all) {
+            StoredRevision r = store.revision(a.outcome().revisionId()).orElseThrow();
+            assertEquals(a.outcome().designId(), r.designId());
+            assertEquals(a.expected().title(), r.title());
+            assertEquals(a.expected().notes(), r.notes());
+            assertEquals(a.expected().inputJson(), r.inputJson());
+            assertEquals(a.expected().resultJson(), r.resultJson());
+            if (a.outcome().created()) {
+                assertTrue(revisionIds.add(a.outcome().revisionId()), "revision id repeats: " + a.outcome().revisionId());
+            }
+        }
+        assertEquals(1 + threads * createsPerThread + threads * revisionsPerThread, revisionIds.size());
+
+        List<RevisionSummary> history = store.history(shared.designId());
+        int expected = 1 + threads * revisionsPerThread;
+        assertEquals(IntStream.rangeClosed(1, expected).boxed().toList(),
+                history.stream().map(RevisionSummary::number).toList(), "numbers 1.." + expected + " without gaps");
+        assertEquals(expected, history.stream().map(RevisionSummary::revisionId).distinct().count());
+        StoredRevision latest = store.latest(shared.designId()).orElseThrow();
+        assertEquals(history.get(expected - 1).revisionId(), latest.revisionId());
+        assertEquals(expected, latest.number());
     }
 
     static int commonPrefix(String a, String b) {
