@@ -70,12 +70,11 @@ final class TestDatabases {
                 problems.add(user + ": " + e.getMessage());
             }
         }
-        String message = "PostgreSQL at " + pgUrl() + " is not reachable with trust auth (" + String.join("; ", problems)
-                + "); the PostgreSQL store tests are skipped. Set CI=true to make this a failure.";
+        String message = "PostgreSQL at " + pgUrl() + " is not reachable with trust auth (" + String.join("; ", problems) + ")";
         if ("true".equalsIgnoreCase(System.getenv("CI"))) {
-            throw new AssertionError(message);
+            throw new AssertionError(message + "; CI=true, so the PostgreSQL store tests fail instead of skipping");
         }
-        Assumptions.abort(message);
+        Assumptions.abort(message + "; the PostgreSQL store tests are skipped (set CI=true to make this a failure)");
         return null;
     }
 
