@@ -5,6 +5,8 @@ import com.zaxxer.hikari.HikariDataSource;
 import org.flywaydb.core.Flyway;
 
 import javax.sql.DataSource;
+import java.sql.Connection;
+import java.sql.SQLException;
 import java.util.Optional;
 
 /**
@@ -23,13 +25,27 @@ public final class Database implements AutoCloseable {
         this.schemaVersion = schemaVersion;
     }
 
-    /** Opens the pool and migrates the schema to the latest version. */
+    /**
+     * Opens the pool and migrates the schema to the latest version.
+     *
+     * @throws StoreException when the database cannot be reached or migrated (message names the URL, password masked)
+     */
     public static Database open(DatabaseSettings settings) {
         return open(settings, Optional.empty());
     }
 
     /** Opens the pool and migrates up to {@code targetVersion} only (for migration tests). */
     static Database open(DatabaseSettings settings, Optional<String> targetVersion) {
+        try {
+            return openUnchecked(settings, targetVersion);
+        } catch (StoreException e) {
+            throw e;
+        } catch (RuntimeException e) {
+            throw new StoreException("cannot open the design store at " + settings.describe() + ": " + e.getMessage(), e);
+        }
+    }
+
+    private static Database openUnchecked(DatabaseSettings settings, Optional<String> targetVersion) {
         String version = migrate(settings, targetVersion);
         HikariConfig config = new HikariConfig();
         config.setJdbcUrl(settings.jdbcUrl());
@@ -71,6 +87,15 @@ public final class Database implements AutoCloseable {
     /** The Flyway schema version in force after opening, e.g. {@code "2"}. */
     public String schemaVersion() {
         return schemaVersion;
+    }
+
+    /** True when a connection answers within {@code timeoutSeconds} (for a readiness check such as /health). */
+    public boolean isReachable(int timeoutSeconds) {
+        try (Connection c = dataSource.getConnection()) {
+            return c.isValid(timeoutSeconds);
+        } catch (SQLException e) {
+            return false;
+        }
     }
 
     @Override
