@@ -1,0 +1,89 @@
+package coilwright.store;
+
+import javax.sql.DataSource;
+import java.sql.Connection;
+import java.sql.SQLException;
+import java.util.Set;
+
+/**
+ * Runs units of work in a transaction and retries those that failed for a transient reason: a duplicate key
+ * written by a concurrent transaction (the retry then finds the other's row), a lock timeout, a deadlock or a
+ * serialization failure. SQL states: 23505 unique violation, 40001 serialization failure or deadlock (H2,
+ * PostgreSQL), 40P01 deadlock (PostgreSQL), HYT00 lock timeout and 90131 concurrent update (H2).
+ */
+final class Transactions {
+    private static final Set<String> TRANSIENT = Set.of("23505", "40001", "40P01", "HYT00", "90131");
+    private static final int MAX_ATTEMPTS = 8;
+
+    @FunctionalInterface
+    interface Work<T> {
+        T run(Connection c) throws SQLException;
+    }
+
+    private final DataSource dataSource;
+
+    Transactions(DataSource dataSource) {
+        this.dataSource = dataSource;
+    }
+
+    /** Runs {@code work} in one transaction; unchecked exceptions from it roll back and pass through. */
+    <T> T inTransaction(String what, Work<T> work) {
+        for (int attempt = 1; ; attempt++) {
+            try {
+                return once(work);
+            } catch (SQLException e) {
+                if (attempt >= MAX_ATTEMPTS || !isTransient(e)) {
+                    throw new StoreException(what + " failed: " + e.getMessage(), e);
+                }
+                pause(attempt);
+            }
+        }
+    }
+
+    /** Runs a read on an auto-commit connection. */
+    <T> T read(String what, Work<T> work) {
+        try (Connection c = dataSource.getConnection()) {
+            return work.run(c);
+        } catch (SQLException e) {
+            throw new StoreException(what + " failed: " + e.getMessage(), e);
+        }
+    }
+
+    private <T> T once(Work<T> work) throws SQLException {
+        try (Connection c = dataSource.getConnection()) {
+            c.setAutoCommit(false);
+            try {
+                T result = work.run(c);
+                c.commit();
+                return result;
+            } catch (SQLException | RuntimeException e) {
+                try {
+                    c.rollback();
+                } catch (SQLException suppressed) {
+                    e.addSuppressed(suppressed);
+                }
+                throw e;
+            } finally {
+                c.setAutoCommit(true);
+            }
+        }
+    }
+
+    static boolean isTransient(SQLException e) {
+        for (Throwable t = e; t != null; t = t.getCause()) {
+            if (t instanceof SQLException s && s.getSQLState() != null && TRANSIENT.contains(s.getSQLState())) {
+                return true;
+            }
+        }
+        return false;
+    }
+
+    private static void pause(int attempt) {
+        try {
+            Thread.sleep(java.util.concurrent.ThreadLocalRandom.current().nextLong(1, 5L * attempt + 2));
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+            throw new StoreException("interrupted while retrying a transaction", e);
+        }
+    }
+}
