@@ -1,5 +1,7 @@
 package coilwright.magnet;
 
+import net.jqwik.api.Assume;
+
 import net.jqwik.api.Arbitraries;
 import net.jqwik.api.Arbitrary;
 import net.jqwik.api.Combinators;
@@ -71,6 +73,8 @@ class GapFieldCalculatorPropertiesTest {
                                                             @ForAll @IntRange(min = 1, max = 20) int polePairs,
                                                             @ForAll @IntRange(min = 6, max = 72) int slots,
                                                             @ForAll @DoubleRange(min = -40, max = 200) double tempC) {
+        // a slot opening as wide as the slot pitch is refused by design; that case has its own test
+        Assume.that(r.slotOpeningM() < 0.9 * Math.PI * r.gapDiameterM() / slots);
         GapField f = GapFieldCalculator.solve(r, 2 * polePairs, slots, tempC);
         assertSane(f);
         assertHarmonicsDecay(f);
