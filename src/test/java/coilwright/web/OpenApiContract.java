@@ -10,7 +10,6 @@ import com.networknt.schema.SchemaLocation;
 import com.networknt.schema.SchemaRegistry;
 import com.networknt.schema.dialect.Dialects;
 import io.restassured.response.Response;
-import java.util.Iterator;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
@@ -93,9 +92,5 @@ public final class OpenApiContract {
 
     private static String escape(String token) {
         return token.replace("~", "~0").replace("/", "~1");
-    }
-
-    static Iterator<String> paths() {
-        return DOC.get("paths").propertyNames().iterator();
     }
 }
