@@ -11,7 +11,10 @@ import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.SerializationFeature;
 import com.fasterxml.jackson.databind.SerializerProvider;
 import com.fasterxml.jackson.databind.json.JsonMapper;
+import com.fasterxml.jackson.databind.cfg.CoercionAction;
+import com.fasterxml.jackson.databind.cfg.CoercionInputShape;
 import com.fasterxml.jackson.databind.module.SimpleModule;
+import com.fasterxml.jackson.databind.type.LogicalType;
 import com.fasterxml.jackson.databind.ser.std.StdSerializer;
 import com.fasterxml.jackson.datatype.jdk8.Jdk8Module;
 import java.io.IOException;
@@ -41,6 +44,8 @@ public final class Json {
         finiteOnly.addSerializer(Float.class, new FiniteFloatSerializer());
         finiteOnly.addSerializer(Float.TYPE, new FiniteFloatSerializer());
         finiteOnly.addSerializer(double[].class, new FiniteDoubleArraySerializer());
+        finiteOnly.addDeserializer(Double.class, new FiniteDoubleDeserializer(false));
+        finiteOnly.addDeserializer(Double.TYPE, new FiniteDoubleDeserializer(true));
         return JsonMapper.builder()
                 .addModule(new Jdk8Module())
                 .addModule(finiteOnly)
@@ -55,6 +60,8 @@ public final class Json {
                 .disable(JsonWriteFeature.WRITE_NAN_AS_STRINGS)
                 .enable(JsonParser.Feature.STRICT_DUPLICATE_DETECTION)
                 .disable(SerializationFeature.FAIL_ON_EMPTY_BEANS)
+                .withCoercionConfig(LogicalType.Float, c -> c.setCoercion(CoercionInputShape.String, CoercionAction.Fail))
+                .withCoercionConfig(LogicalType.Integer, c -> c.setCoercion(CoercionInputShape.String, CoercionAction.Fail))
                 .build();
     }
 

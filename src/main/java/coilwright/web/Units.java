@@ -57,6 +57,11 @@ public enum Units {
         return this == SI ? shown : q.fromImperial(shown);
     }
 
+    /** As {@link #symbol(Quantity)} by name, for templates: {@code ${units.symbol('LENGTH')}}. */
+    public String symbol(String quantity) {
+        return symbol(Quantity.valueOf(quantity));
+    }
+
     /** The unit symbol shown beside a field. */
     public String symbol(Quantity q) {
         return this == SI ? q.siSymbol() : q.imperialSymbol();
