@@ -3,7 +3,7 @@ package coilwright.load;
 /**
  * Ideal average-value factors of diode bridges with no source impedance and no diode drop:
  * Vdc = factor * V (line-to-line rms for three-phase, rms for single-phase).
- * Source: Mohan, Undeland and Robbins, "Power Electronics", 3rd ed., 2003, chapter 5 (eqs. 5-4 and 5-62).
+ * Source: Mohan, Undeland and Robbins, "Power Electronics", 3rd ed., 2003, chapter 5 (diode rectifiers).
  */
 public final class BridgeFactors {
     /** Three-phase six-pulse bridge: 3*sqrt(2)/pi = 1.3505. */

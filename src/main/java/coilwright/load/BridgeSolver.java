@@ -78,8 +78,9 @@ public final class BridgeSolver {
         double scale = md.currentScaleA();
         Residual r = new Residual(md, ta, y);
         for (int it = 0; it < MAX_NEWTON; it++) {
-            double size = Math.max(norm(y), 1e-6 * scale);
-            if (norm(r.value) <= NEWTON_TOLERANCE * size) {
+            double size = Math.max(norm(y), 1e-3 * scale);
+            if (norm(r.value) <= NEWTON_TOLERANCE * size
+                    || it >= MAX_NEWTON / 2 && norm(r.value) <= ACCEPT_TOLERANCE * size) {
                 return r.sweep;
             }
             double[][] jac = new double[n][n];
