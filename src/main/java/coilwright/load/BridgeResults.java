@@ -140,7 +140,7 @@ final class BridgeResults {
                 new UnivariateObjectiveFunction(tau -> {
                     seg.basis(tau, b2);
                     return Math.abs(BridgeSegment.dot(fn, b2));
-                }), GoalType.MAXIMIZE, new SearchInterval(lo, hi, bestTau)).getValue();
+                }), GoalType.MAXIMIZE, new SearchInterval(lo, hi, Math.min(hi, Math.max(lo, bestTau)))).getValue();
         return Math.max(best, refined);
     }
 }
