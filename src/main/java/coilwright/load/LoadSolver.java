@@ -1,5 +1,6 @@
 package coilwright.load;
 
+import coilwright.validation.Checks;
 import coilwright.validation.FieldError;
 import coilwright.validation.InvalidInputException;
 
@@ -21,6 +22,7 @@ public final class LoadSolver {
      * @throws InvalidInputException when the bridge does not match the source's phase count
      */
     public static OperatingPoint solve(AcSource source, Load load) {
+        new Checks().present("source", source).present("load", load).throwIfAny();
         if (load instanceof BatteryLoad b) {
             return battery(source, b);
         }
