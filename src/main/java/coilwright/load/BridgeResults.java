@@ -12,7 +12,7 @@ import java.util.List;
 /** Period averages of a periodic bridge solution, integrated exactly segment by segment. */
 final class BridgeResults {
     /** Sampling step for peak search before refinement, electrical radians. */
-    private static final double PEAK_SAMPLE_RAD = Math.toRadians(0.5);
+    private static final double PEAK_SAMPLE_RAD = Math.toRadians(2.0);
 
     private BridgeResults() {
     }

@@ -15,7 +15,7 @@ package coilwright.load;
  * in, e.g., Mohan, Undeland and Robbins, "Power Electronics", 2003, ch. 5.
  */
 public final class BridgeSolver {
-    private static final int FIXED_POINT_SWEEPS = 4;
+    private static final int FIXED_POINT_SWEEPS = 2;
     private static final int MAX_NEWTON = 60;
     private static final double NEWTON_TOLERANCE = 1e-13;
     private static final double ACCEPT_TOLERANCE = 1e-9;
@@ -77,21 +77,15 @@ public final class BridgeSolver {
         double[] y = java.util.Arrays.copyOf(xa, n);
         double scale = md.currentScaleA();
         Residual r = new Residual(md, ta, y);
+        double[][] jac = null;
         for (int it = 0; it < MAX_NEWTON; it++) {
             double size = Math.max(norm(y), 1e-3 * scale);
             if (norm(r.value) <= NEWTON_TOLERANCE * size
                     || it >= MAX_NEWTON / 2 && norm(r.value) <= ACCEPT_TOLERANCE * size) {
                 return r.sweep;
             }
-            double[][] jac = new double[n][n];
-            for (int j = 0; j < n; j++) {
-                double[] yj = y.clone();
-                double h = 1e-7 * size;
-                yj[j] += h;
-                Residual rj = new Residual(md, ta, yj);
-                for (int i = 0; i < n; i++) {
-                    jac[i][j] = (rj.value[i] - r.value[i]) / h;
-                }
+            if (jac == null) {
+                jac = jacobian(md, ta, y, r, size);
             }
             double[] step = solveSmall(jac, r.value);
             Residual next = null;
@@ -114,11 +108,30 @@ public final class BridgeSolver {
                 md.unshift(r.sweep.end, fp);
                 next = new Residual(md, ta, java.util.Arrays.copyOf(fp, n));
             }
+            if (norm(next.value) > 0.1 * norm(r.value)) {
+                jac = null;
+            }
             r = next;
             y = next.y;
         }
         throw new IllegalStateException("bridge solver: no periodic solution after " + MAX_NEWTON
                 + " Newton steps (residual " + norm(r.value) + " A)");
+    }
+
+    /** Forward-difference Jacobian of the residual (reused while it keeps converging fast: a chord method). */
+    private static double[][] jacobian(BridgeModel md, double ta, double[] y, Residual r, double size) {
+        int n = y.length;
+        double[][] jac = new double[n][n];
+        for (int j = 0; j < n; j++) {
+            double[] yj = y.clone();
+            double h = 1e-7 * size;
+            yj[j] += h;
+            Residual rj = new Residual(md, ta, yj);
+            for (int i = 0; i < n; i++) {
+                jac[i][j] = (rj.value[i] - r.value[i]) / h;
+            }
+        }
+        return jac;
     }
 
     /** Map(x0) unshifted minus x0, on the independent branch currents. */
