@@ -7,7 +7,7 @@ import coilwright.validation.Checks;
  *
  * @param lengthM          one-way length, 0 to 10 000 m (0 means no cable)
  * @param conductorAreaM2  cross-section of one conductor, 1e-8 to 1e-2 m^2
- * @param temperatureC     conductor temperature, -60 to 250 C
+ * @param temperatureC     conductor temperature, -50 to 250 C
  */
 public record Cable(double lengthM, double conductorAreaM2, double temperatureC) {
     /** No cable at all (zero length). */
@@ -17,13 +17,13 @@ public record Cable(double lengthM, double conductorAreaM2, double temperatureC)
         new Checks()
                 .range("lengthM", lengthM, 0, 10_000)
                 .range("conductorAreaM2", conductorAreaM2, 1e-8, 1e-2)
-                .range("temperatureC", temperatureC, -60, 250)
+                .range("temperatureC", temperatureC, -50, 250)
                 .throwIfAny();
     }
 
     /** Resistance of one conductor (one AC line), Ohm: rho(T) * L / A. */
     public double lineResistanceOhm() {
-        return CableResistance.conductorOhm(lengthM, conductorAreaM2, temperatureC);
+        return lengthM == 0 ? 0 : coilwright.conductor.Copper.resistanceOhm(lengthM, conductorAreaM2, temperatureC);
     }
 
     /** Loop resistance of a go-and-return pair (DC cable, single-phase AC), Ohm: 2 * rho(T) * L / A. */

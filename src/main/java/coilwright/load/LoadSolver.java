@@ -1,5 +1,6 @@
 package coilwright.load;
 
+import coilwright.machine.Connection;
 import coilwright.validation.Checks;
 import coilwright.validation.FieldError;
 import coilwright.validation.InvalidInputException;

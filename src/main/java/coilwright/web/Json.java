@@ -26,6 +26,13 @@ import java.io.IOException;
  * loudly (HTTP 500, visible in tests) instead of producing {@code NaN} or a quoted "NaN".
  */
 public final class Json {
+    /** The property that names the variant of a sealed input or result type (its record's simple name). */
+    public static final String TYPE_PROPERTY = "type";
+
+    /** The sealed types of the core that travel as JSON; each variant is written with {@link #TYPE_PROPERTY}. */
+    static final java.util.List<Class<?>> SEALED_TYPES = java.util.List.of(
+            coilwright.magnet.RotorSpec.class, coilwright.machine.StatorSpec.class, coilwright.load.Load.class);
+
     private static final ObjectMapper MAPPER = create();
 
     private Json() {
@@ -46,7 +53,12 @@ public final class Json {
         finiteOnly.addSerializer(double[].class, new FiniteDoubleArraySerializer());
         finiteOnly.addDeserializer(Double.class, new FiniteDoubleDeserializer(false));
         finiteOnly.addDeserializer(Double.TYPE, new FiniteDoubleDeserializer(true));
-        return JsonMapper.builder()
+        JsonMapper.Builder builder = JsonMapper.builder();
+        for (Class<?> sealed : SEALED_TYPES) {
+            builder.addMixIn(sealed, TypedVariant.class);
+            builder.registerSubtypes(sealed.getPermittedSubclasses());
+        }
+        return builder
                 .addModule(new Jdk8Module())
                 .addModule(finiteOnly)
                 .enable(DeserializationFeature.FAIL_ON_UNKNOWN_PROPERTIES)
@@ -63,6 +75,12 @@ public final class Json {
                 .withCoercionConfig(LogicalType.Float, c -> c.setCoercion(CoercionInputShape.String, CoercionAction.Fail))
                 .withCoercionConfig(LogicalType.Integer, c -> c.setCoercion(CoercionInputShape.String, CoercionAction.Fail))
                 .build();
+    }
+
+    /** Writes a sealed type's variant name beside its fields. */
+    @com.fasterxml.jackson.annotation.JsonTypeInfo(use = com.fasterxml.jackson.annotation.JsonTypeInfo.Id.SIMPLE_NAME,
+            include = com.fasterxml.jackson.annotation.JsonTypeInfo.As.PROPERTY, property = TYPE_PROPERTY)
+    private interface TypedVariant {
     }
 
     /** Thrown when a result holds NaN or an infinity: a bug in the calculation, never valid output. */

@@ -46,6 +46,7 @@ final class JsonLeaves {
         if (raw == OptionalInt.class) return wrap(bind(node, int.class, path, errors), v -> OptionalInt.of((Integer) v));
         if (raw == OptionalLong.class) return wrap(bind(node, long.class, path, errors), v -> OptionalLong.of((Long) v));
         if (List.class == raw || Collection.class == raw) return list(node, arg(type), path, errors);
+        if (raw.isSealed()) return variant(node, raw, path, errors);
         String expected = describe(type);
         boolean fits = raw.isRecord() ? node.isObject()
                 : isDecimal(raw) || isWhole(raw) ? node.isNumber()
@@ -73,6 +74,33 @@ final class JsonLeaves {
         } catch (Exception e) {
             return fail(path, node, "cannot be read as " + raw.getSimpleName(), expected, errors);
         }
+    }
+
+    /**
+     * A sealed interface of records: the object names its variant in {@code "type"} (the record's simple name), the
+     * same property {@link Json} writes.
+     */
+    private Object variant(JsonNode node, Class<?> sealed, String path, List<FieldError> errors) {
+        if (!node.isObject()) {
+            return fail(path, node, "must be a JSON object", "a JSON object with \"type\"", errors);
+        }
+        String allowed = "one of " + Arrays.stream(sealed.getPermittedSubclasses()).map(Class::getSimpleName)
+                .collect(Collectors.joining(", "));
+        JsonNode typeNode = node.get(Json.TYPE_PROPERTY);
+        String typePath = path.isEmpty() ? Json.TYPE_PROPERTY : path + "." + Json.TYPE_PROPERTY;
+        if (typeNode == null || !typeNode.isTextual()) {
+            errors.add(new FieldError(typePath, typeNode == null ? "missing" : text(typeNode),
+                    typePath + " is missing: name the kind, " + allowed, allowed));
+            return RecordBinder.FAILED;
+        }
+        for (Class<?> variant : sealed.getPermittedSubclasses()) {
+            if (variant.getSimpleName().equals(typeNode.textValue()) && variant.isRecord()) {
+                com.fasterxml.jackson.databind.node.ObjectNode body = ((com.fasterxml.jackson.databind.node.ObjectNode) node).deepCopy();
+                body.remove(Json.TYPE_PROPERTY);
+                return records.bindRecord(body, variant, path, errors);
+            }
+        }
+        return fail(typePath, typeNode, "must be " + allowed, allowed, errors);
     }
 
     private Object list(JsonNode node, Type element, String path, List<FieldError> errors) {
@@ -112,6 +140,7 @@ final class JsonLeaves {
         if (raw == boolean.class || raw == Boolean.class) return "true or false";
         if (raw == String.class) return "a string";
         if (raw.isRecord()) return "a JSON object";
+        if (raw.isSealed()) return "a JSON object with \"type\"";
         if (List.class == raw || Collection.class == raw) return "an array";
         return "a " + raw.getSimpleName();
     }

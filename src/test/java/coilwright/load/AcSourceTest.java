@@ -1,5 +1,6 @@
 package coilwright.load;
 
+import coilwright.machine.Connection;
 import coilwright.validation.InvalidInputException;
 import org.junit.jupiter.api.Test;
 
@@ -27,7 +28,7 @@ class AcSourceTest {
         String msg = e.getMessage();
         assertTrue(msg.contains("phases = 2: must be 1 or 3"), msg);
         assertTrue(msg.contains("connection is missing"), msg);
-        assertTrue(msg.contains("emfPhaseRmsV = -1.0: must be between 0.0 to 1000000.0"), msg);
+        assertTrue(msg.contains("emfPhaseRmsV = -1.0: must be between 0.0 and 1000000.0"), msg);
         assertTrue(msg.contains("frequencyHz = 0.0: must be > 0.0"), msg);
         assertTrue(msg.contains("phaseResistanceOhm = NaN: must be a finite number"), msg);
         assertTrue(msg.contains("phaseInductanceH = 0.0"), msg);

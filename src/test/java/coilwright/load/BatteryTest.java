@@ -25,7 +25,7 @@ class BatteryTest {
         InvalidInputException e = assertThrows(InvalidInputException.class,
                 () -> new Battery(Chemistry.CUSTOM, 0, 0, ChargeStage.NOMINAL, -1));
         String msg = e.getMessage();
-        assertTrue(msg.contains("cells = 0: must be between 1 to 400"), msg);
+        assertTrue(msg.contains("cells = 0: must be between 1 and 400"), msg);
         assertTrue(msg.contains("customVoltageV = 0.0: must be > 0.0 and <= 2000.0"), msg);
         assertTrue(msg.contains("internalResistanceOhm = -1.0"), msg);
         assertThrows(InvalidInputException.class, () -> new Battery(null, 4, 0, null, 0));

@@ -18,6 +18,6 @@ class CableTest {
     void rejects_invalid_fields() {
         InvalidInputException e = assertThrows(InvalidInputException.class, () -> new Cable(-1, 0, 400));
         assertEquals(3, e.errors().size());
-        assertTrue(e.getMessage().contains("conductorAreaM2 = 0.0: must be between 1.0E-8 to 0.01"), e.getMessage());
+        assertTrue(e.getMessage().contains("conductorAreaM2 = 0.0: must be between 1.0E-8 and 0.01"), e.getMessage());
     }
 }

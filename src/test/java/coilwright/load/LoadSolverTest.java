@@ -1,5 +1,6 @@
 package coilwright.load;
 
+import coilwright.machine.Connection;
 import coilwright.validation.InvalidInputException;
 import org.junit.jupiter.api.Test;
 

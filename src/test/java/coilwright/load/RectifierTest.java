@@ -17,7 +17,7 @@ class RectifierTest {
     void rejects_a_drop_out_of_range_and_missing_fields() {
         InvalidInputException e = assertThrows(InvalidInputException.class,
                 () -> new Rectifier(BridgeType.THREE_PHASE_BRIDGE, DiodeType.SILICON, 6));
-        assertTrue(e.getMessage().contains("forwardDropV = 6.0: must be between 0.0 to 5.0"), e.getMessage());
+        assertTrue(e.getMessage().contains("forwardDropV = 6.0: must be between 0.0 and 5.0"), e.getMessage());
         assertThrows(InvalidInputException.class, () -> new Rectifier(null, DiodeType.SILICON, 0.8));
     }
 }
