@@ -51,6 +51,7 @@ public final class Json {
         finiteOnly.addSerializer(Float.class, new FiniteFloatSerializer());
         finiteOnly.addSerializer(Float.TYPE, new FiniteFloatSerializer());
         finiteOnly.addSerializer(double[].class, new FiniteDoubleArraySerializer());
+        finiteOnly.addSerializer(org.apache.commons.math3.fraction.Fraction.class, new FractionSerializer());
         finiteOnly.addDeserializer(Double.class, new FiniteDoubleDeserializer(false));
         finiteOnly.addDeserializer(Double.TYPE, new FiniteDoubleDeserializer(true));
         JsonMapper.Builder builder = JsonMapper.builder();
@@ -75,6 +76,20 @@ public final class Json {
                 .withCoercionConfig(LogicalType.Float, c -> c.setCoercion(CoercionInputShape.String, CoercionAction.Fail))
                 .withCoercionConfig(LogicalType.Integer, c -> c.setCoercion(CoercionInputShape.String, CoercionAction.Fail))
                 .build();
+    }
+
+    /** Writes a fraction such as slots per pole per phase as text, {@code "2/5"}. */
+    private static final class FractionSerializer extends StdSerializer<org.apache.commons.math3.fraction.Fraction> {
+        FractionSerializer() {
+            super(org.apache.commons.math3.fraction.Fraction.class);
+        }
+
+        @Override
+        public void serialize(org.apache.commons.math3.fraction.Fraction value, JsonGenerator gen, SerializerProvider provider)
+                throws IOException {
+            gen.writeString(value.getDenominator() == 1 ? Integer.toString(value.getNumerator())
+                    : value.getNumerator() + "/" + value.getDenominator());
+        }
     }
 
     /** Writes a sealed type's variant name beside its fields. */
