@@ -21,6 +21,8 @@ import java.util.Optional;
 public final class RewindPlanner {
     /** kw3 above which a delta option carries a circulating-current caution. */
     static final double DELTA_KW3_CAUTION = 0.01;
+    /** Deviations closer than this count as equal when ranking. */
+    static final double RANK_RESOLUTION = 1e-9;
 
     private RewindPlanner() {
     }
@@ -47,10 +49,12 @@ public final class RewindPlanner {
                 rewinds.addAll(rewinds(machine, ch, target, conn, paths, wantedKe));
             }
         }
-        reconnections.sort(Comparator.comparingDouble((Reconnection r) -> Math.abs(r.relativeDeviation()))
+        reconnections.sort(Comparator.comparingLong((Reconnection r) -> rankKey(r.relativeDeviation()))
                 .thenComparing(r -> !r.unchanged()).thenComparingInt(Reconnection::parallelPaths));
-        rewinds.sort(Comparator.comparingDouble((RewindOption r) -> Math.abs(r.relativeDeviation()))
-                .thenComparing(r -> r.connection() != machine.connection()).thenComparingInt(RewindOption::parallelPaths));
+        rewinds.sort(Comparator.comparingLong((RewindOption r) -> rankKey(r.relativeDeviation()))
+                .thenComparing(r -> r.connection() != machine.connection())
+                .thenComparing(r -> r.parallelPaths() != machine.parallelPaths())
+                .thenComparingInt(RewindOption::parallelPaths));
         List<String> notes = List.of(
                 "Ke of every option scales the measured Ke: the EMF per turn stays, only the turns in series change",
                 String.format(Locale.ROOT, "predicted Ke, voltages and cut-in speeds carry the +-%.1f %% of the measured Ke",
@@ -63,6 +67,14 @@ public final class RewindPlanner {
                         : "fill checked against the stated coil window");
         return new RewindPlan(ch, target, wantedKe, ch.keLineRmsVPerRpm().relativeUncertainty(), reconnections,
                 rewinds, notes);
+    }
+
+    /**
+     * Ranking key: the deviation's magnitude in steps of {@value #RANK_RESOLUTION}, so options that meet the target
+     * equally well up to rounding noise tie and the tie-breaks (same connection, same paths, fewer paths) decide.
+     */
+    static long rankKey(double relativeDeviation) {
+        return Math.round(Math.abs(relativeDeviation) / RANK_RESOLUTION);
     }
 
     private static List<Connection> connections(int phases) {
