@@ -21,6 +21,7 @@ import java.util.Optional;
  * @param phaseResistanceOhm         phase resistance at the measured temperature, Ohm (if measured)
  * @param phaseResistance20COhm      the same at 20 C (IEC 60028 copper), Ohm (if measured)
  * @param meanTurnLengthM            mean turn length implied by the resistance, m (if measured)
+ * @param phaseInductanceH           phase inductance from the line-to-line reading, H (if measured; +-10 %)
  * @param measuredTemperatureC       copper temperature of the resistance reading, C
  * @param derivedFrom                what was derived and from which reading, in sentences
  * @param warnings                   things to check
@@ -30,7 +31,8 @@ public record MachineCharacterisation(int poles, boolean polesInferred, int coil
                                       double thirdHarmonicWindingFactor, List<Integer> allowedParallelPaths,
                                       Band keLineRmsVPerRpm, Band kePhaseRmsVPerRpm, Band windingFactorTimesFluxWb,
                                       Optional<Band> phaseResistanceOhm, Optional<Band> phaseResistance20COhm,
-                                      Optional<Band> meanTurnLengthM, double measuredTemperatureC,
+                                      Optional<Band> meanTurnLengthM, Optional<Band> phaseInductanceH,
+                                      double measuredTemperatureC,
                                       List<String> derivedFrom, List<String> warnings) {
     public MachineCharacterisation {
         allowedParallelPaths = List.copyOf(allowedParallelPaths);

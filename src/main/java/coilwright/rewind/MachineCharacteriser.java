@@ -2,6 +2,7 @@ package coilwright.rewind;
 
 import coilwright.conductor.Copper;
 import coilwright.conductor.WireSpec;
+import coilwright.machine.AlternatorModel;
 import coilwright.machine.EmfEquation;
 import coilwright.validation.FieldError;
 import coilwright.validation.InvalidInputException;
@@ -19,6 +20,9 @@ public final class MachineCharacteriser {
     public static final double MAX_MEAN_TURN_LENGTH_M = 5.0;
     /** Below this mean turn a warning is given: small alternator coils are rarely under 30 mm round (common practice). */
     public static final double SMALL_MEAN_TURN_LENGTH_M = 0.030;
+
+    /** Relative accuracy given to a measured inductance: a meter reading at its test frequency (common practice). */
+    public static final double INDUCTANCE_UNCERTAINTY = AlternatorModel.ENTERED_INDUCTANCE_UNCERTAINTY;
 
     private MachineCharacteriser() {
     }
@@ -103,10 +107,17 @@ public final class MachineCharacteriser {
             warnings.add("no resistance measured: the mean turn length, resistance, current and copper loss of the"
                     + " options are not predicted");
         }
+        Optional<Band> inductance = Optional.empty();
+        if (m.hasInductance()) {
+            double lPh = m.lineInductanceH() / Terminals.lineResistanceFactor(machine.phases(), machine.connection());
+            inductance = Optional.of(Band.of(lPh, INDUCTANCE_UNCERTAINTY));
+            derived.add(String.format(Locale.ROOT, "phase inductance %.3e H from %.3e H between line terminals, +-%.0f %%",
+                    lPh, m.lineInductanceH(), 100 * INDUCTANCE_UNCERTAINTY));
+        }
         return new MachineCharacterisation(poles, inferred, w.coilsPerPhase(), machine.parallelPaths(), nPh,
                 w.coilPitchSlots(), w.fundamentalWindingFactor(), w.thirdHarmonicFactor().windingFactor(),
                 StarOfSlots.allowedParallelPaths(machine.windingSpec()), Band.of(keLine, uKe), Band.of(kePh, uKe),
-                Band.of(kwPhi, uKe), rPh, r20, mlt, m.measuredTemperatureC(), derived, warnings);
+                Band.of(kwPhi, uKe), rPh, r20, mlt, inductance, m.measuredTemperatureC(), derived, warnings);
     }
 
     /** MLT = R_ph A a^2 / (rho(T) N_c C), m. */

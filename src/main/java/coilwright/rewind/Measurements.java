@@ -15,6 +15,10 @@ import coilwright.validation.Checks;
  * @param measuredFrequencyHz         electrical frequency at that speed, Hz, 0 = not measured, else &gt; 0 and &lt;= 10000
  * @param lineResistanceOhm           DC resistance between two line terminals, Ohm, 0 = not measured, else &lt;= 100000
  * @param measuredTemperatureC        copper temperature when the resistance was measured, C, -50 to 250
+ * @param lineInductanceH             inductance between two line terminals (an LCR meter at its test frequency),
+ *                                    H, 0 = not measured, else &lt;= 10; converted to phase like the resistance
+ *                                    (star L_LL = 2 L_ph, delta (2/3) L_ph, single phase L_ph), taken as good to
+ *                                    10 % (common practice)
  * @param voltageAccuracyPercent      accuracy of the voltage reading, %, 0 to 50 (default 1 %, common practice
  *                                    for a handheld true-rms meter on AC volts)
  * @param speedAccuracyPercent        accuracy of the speed reading, %, 0 to 50 (default 1 %, common practice
@@ -24,7 +28,8 @@ import coilwright.validation.Checks;
  *                                    practice for a low-ohm reading that includes lead resistance)
  */
 public record Measurements(double openCircuitLineVoltageRmsV, double measuredSpeedRpm, double measuredFrequencyHz,
-                           double lineResistanceOhm, double measuredTemperatureC, double voltageAccuracyPercent,
+                           double lineResistanceOhm, double measuredTemperatureC, double lineInductanceH,
+                           double voltageAccuracyPercent,
                            double speedAccuracyPercent, double frequencyAccuracyPercent,
                            double resistanceAccuracyPercent) {
     public static final double DEFAULT_VOLTAGE_ACCURACY_PERCENT = 1.0;
@@ -40,6 +45,7 @@ public record Measurements(double openCircuitLineVoltageRmsV, double measuredSpe
                 .range("measuredFrequencyHz", measuredFrequencyHz, 0, 10_000)
                 .range("lineResistanceOhm", lineResistanceOhm, 0, 100_000)
                 .range("measuredTemperatureC", measuredTemperatureC, Copper.MIN_TEMPERATURE_C, Copper.MAX_TEMPERATURE_C)
+                .range("lineInductanceH", lineInductanceH, 0, 10)
                 .range("voltageAccuracyPercent", voltageAccuracyPercent, 0, MAX_ACCURACY_PERCENT)
                 .range("speedAccuracyPercent", speedAccuracyPercent, 0, MAX_ACCURACY_PERCENT)
                 .range("frequencyAccuracyPercent", frequencyAccuracyPercent, 0, MAX_ACCURACY_PERCENT)
@@ -48,7 +54,7 @@ public record Measurements(double openCircuitLineVoltageRmsV, double measuredSpe
     }
 
     /**
-     * Readings with the default accuracies (voltage 1 %, speed 1 %, frequency 0.5 %, resistance 2 %).
+     * Readings with the default accuracies (voltage 1 %, speed 1 %, frequency 0.5 %, resistance 2 %), no inductance.
      *
      * @param openCircuitLineVoltageRmsV line voltage (rms) at no load, V
      * @param measuredSpeedRpm           speed of that reading, rpm
@@ -59,8 +65,20 @@ public record Measurements(double openCircuitLineVoltageRmsV, double measuredSpe
     public static Measurements of(double openCircuitLineVoltageRmsV, double measuredSpeedRpm,
                                   double measuredFrequencyHz, double lineResistanceOhm, double measuredTemperatureC) {
         return new Measurements(openCircuitLineVoltageRmsV, measuredSpeedRpm, measuredFrequencyHz, lineResistanceOhm,
-                measuredTemperatureC, DEFAULT_VOLTAGE_ACCURACY_PERCENT, DEFAULT_SPEED_ACCURACY_PERCENT,
+                measuredTemperatureC, 0, DEFAULT_VOLTAGE_ACCURACY_PERCENT, DEFAULT_SPEED_ACCURACY_PERCENT,
                 DEFAULT_FREQUENCY_ACCURACY_PERCENT, DEFAULT_RESISTANCE_ACCURACY_PERCENT);
+    }
+
+    /** The same readings with a line-to-line inductance, H (0 = not measured). */
+    public Measurements withLineInductanceH(double inductanceH) {
+        return new Measurements(openCircuitLineVoltageRmsV, measuredSpeedRpm, measuredFrequencyHz, lineResistanceOhm,
+                measuredTemperatureC, inductanceH, voltageAccuracyPercent, speedAccuracyPercent,
+                frequencyAccuracyPercent, resistanceAccuracyPercent);
+    }
+
+    /** True when an inductance was measured. */
+    public boolean hasInductance() {
+        return lineInductanceH > 0;
     }
 
     /** True when a frequency was measured. */

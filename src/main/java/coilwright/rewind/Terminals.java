@@ -24,7 +24,8 @@ public final class Terminals {
     }
 
     /**
-     * R_line-to-line / R_phase: 2 for a three-phase star, 2/3 for delta, 1 for a single phase.
+     * R_line-to-line / R_phase: 2 for a three-phase star, 2/3 for delta, 1 for a single phase. The same factor
+     * converts a line-to-line inductance reading to a phase inductance (mutual coupling between phases ignored).
      *
      * @param phases     1 or 3
      * @param connection STAR or DELTA

@@ -52,7 +52,7 @@ class ExistingMachineTest {
 
     @Test
     void accuracies_too_loose_to_tell_the_pole_count_are_refused() {
-        Measurements loose = new Measurements(24, 300, 100, 0, 20, 1, 5, 5, 2); // 40 poles +- 4
+        Measurements loose = new Measurements(24, 300, 100, 0, 20, 0, 1, 5, 5, 2); // 40 poles +- 4
         InvalidInputException e = assertThrows(InvalidInputException.class, () -> machine(0, loose));
         assertTrue(e.getMessage().contains("more than one even pole count"), e.getMessage());
     }

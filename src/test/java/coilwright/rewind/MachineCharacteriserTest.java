@@ -58,7 +58,7 @@ class MachineCharacteriserTest {
     @Test
     void bands_follow_first_order_propagation_of_the_stated_accuracies() {
         Alternator a = MeasuredMachines.axial(36);
-        Measurements m = new Measurements(a.emfLineRmsV(300), 300, 40, 2 * a.phaseResistanceHotOhm(), 60, 3, 4, 0.5, 2.5);
+        Measurements m = new Measurements(a.emfLineRmsV(300), 300, 40, 2 * a.phaseResistanceHotOhm(), 60, 0, 3, 4, 0.5, 2.5);
         MachineCharacterisation ch = MachineCharacteriser.characterise(new ExistingMachine(12, 16, 3, Layers.DOUBLE,
                 0, Connection.STAR, 4, 1, 36, a.spec().wire(), null, m));
         assertEquals(0.05, ch.keLineRmsVPerRpm().relativeUncertainty(), 1e-12);
@@ -76,6 +76,18 @@ class MachineCharacteriserTest {
         assertEquals(a.phaseResistanceHotOhm(), ch.phaseResistanceOhm().orElseThrow().value(), 1e-12);
         assertEquals(a.kePhaseRmsVPerRpm(), ch.kePhaseRmsVPerRpm().value(), 1e-12);
         assertEquals(a.meanTurnLengthM(), ch.meanTurnLengthM().orElseThrow().value(), 1e-9);
+    }
+
+    @Test
+    void line_inductance_is_converted_to_phase_inductance_with_a_ten_percent_band() {
+        Alternator a = MeasuredMachines.axial(36);
+        ExistingMachine base = MeasuredMachines.existing(a, 16);
+        ExistingMachine m = new ExistingMachine(12, 16, 3, Layers.DOUBLE, 0, Connection.STAR, 0, 1, 36,
+                a.spec().wire(), null, base.measurements().withLineInductanceH(2 * a.phaseInductanceH()));
+        MachineCharacterisation ch = MachineCharacteriser.characterise(m);
+        assertEquals(a.phaseInductanceH(), ch.phaseInductanceH().orElseThrow().value(), 1e-15);
+        assertEquals(0.10, ch.phaseInductanceH().orElseThrow().relativeUncertainty(), 0);
+        assertTrue(MachineCharacteriser.characterise(base).phaseInductanceH().isEmpty());
     }
 
     @Test

@@ -33,7 +33,7 @@ class MeasurementsTest {
     @Test
     void zero_negative_and_nan_readings_are_refused_naming_each_field() {
         InvalidInputException e = assertThrows(InvalidInputException.class,
-                () -> new Measurements(0, -300, Double.NaN, -1, 400, -1, 1, 1, 60));
+                () -> new Measurements(0, -300, Double.NaN, -1, 400, 0, -1, 1, 1, 60));
         var fields = e.errors().stream().map(f -> f.field()).toList();
         assertEquals(java.util.List.of("openCircuitLineVoltageRmsV", "measuredSpeedRpm", "measuredFrequencyHz",
                 "lineResistanceOhm", "measuredTemperatureC", "voltageAccuracyPercent", "resistanceAccuracyPercent"), fields);
