@@ -1,0 +1,183 @@
+package coilwright.load;
+
+/**
+ * The exact solution of the bridge circuit in one conduction state, from time t0 on.
+ * Every waveform in the state is a combination of five functions of tau = t - t0:
+ * cos(wt), sin(wt), 1, exp(lambda1 tau), exp(lambda2 tau). The branch ODE is
+ * L di/dt = f(t) - R i - Rdc g (h^T i), where h marks the branches on the upper rail and g distributes the DC
+ * drop; its modes are lambda1 = -R/L (currents swapping between branches of one rail) and
+ * lambda2 = -(R + Rdc h^T g)/L (the DC current), and the particular solution follows from the
+ * Sherman-Morrison formula for (z I + Rdc g h^T)^-1.
+ */
+final class BridgeSegment {
+    static final int NB = 5;
+
+    final BridgeModel md;
+    final int[] sign;
+    final double t0;
+    final int nUp;
+    final int nDown;
+    final double lambda1;
+    final double lambda2;
+    /** Branch current coefficients [k][basis]. */
+    final double[][] current;
+    /** Upper and lower rail potentials (plus/minus the diode drop) relative to the star point; null when off. */
+    final double[] uUp;
+    final double[] uDown;
+
+    BridgeSegment(BridgeModel md, int[] sign, double t0, double[] x0) {
+        this.md = md;
+        this.sign = sign.clone();
+        this.t0 = t0;
+        int m = md.m;
+        int up = 0;
+        int down = 0;
+        for (int s : sign) {
+            up += s > 0 ? 1 : 0;
+            down += s < 0 ? 1 : 0;
+        }
+        nUp = up;
+        nDown = down;
+        current = new double[m][NB];
+        int n = up + down;
+        if (n == 0) {
+            lambda1 = -md.r / md.l;
+            lambda2 = lambda1;
+            uUp = null;
+            uDown = null;
+            return;
+        }
+        double ac = 0;
+        double bc = 0;
+        double mean = 0;
+        for (int k = 0; k < m; k++) {
+            if (sign[k] != 0) {
+                ac += md.a[k];
+                bc += md.b[k];
+                mean += x0[k];
+            }
+        }
+        mean /= n;
+        double[] g = new double[m];
+        for (int k = 0; k < m; k++) {
+            g[k] = sign[k] > 0 ? (double) down / n : sign[k] < 0 ? -(double) up / n : 0;
+        }
+        double hg = (double) up * down / n;
+        double wl = md.w * md.l;
+        double rDc = md.rDc;
+        // forcing phasor F_k = fa_k - j fb_k for f_k = fa_k cos + fb_k sin
+        double hFr = 0;
+        double hFi = 0;
+        for (int k = 0; k < m; k++) {
+            if (sign[k] > 0) {
+                hFr += md.a[k] - ac / n;
+                hFi -= md.b[k] - bc / n;
+            }
+        }
+        double dr = md.r + rDc * hg;
+        double den = dr * dr + wl * wl;
+        double qr = (hFr * dr + hFi * wl) / den;
+        double qi = (hFi * dr - hFr * wl) / den;
+        double zden = md.r * md.r + wl * wl;
+        double c0 = Math.cos(md.w * t0);
+        double s0 = Math.sin(md.w * t0);
+        double[] delta = new double[m];
+        double hDelta = 0;
+        for (int k = 0; k < m; k++) {
+            if (sign[k] == 0) {
+                continue;
+            }
+            double nr = (md.a[k] - ac / n) - rDc * g[k] * qr;
+            double ni = -(md.b[k] - bc / n) - rDc * g[k] * qi;
+            double ir = (nr * md.r + ni * wl) / zden;
+            double ii = (ni * md.r - nr * wl) / zden;
+            current[k][0] = ir;
+            current[k][1] = -ii;
+            current[k][2] = -g[k] * md.v0 / dr;
+            delta[k] = (x0[k] - mean) - (current[k][0] * c0 + current[k][1] * s0 + current[k][2]);
+            hDelta += sign[k] > 0 ? delta[k] : 0;
+        }
+        double alpha = hDelta / hg;
+        for (int k = 0; k < m; k++) {
+            if (sign[k] != 0) {
+                current[k][3] = delta[k] - alpha * g[k];
+                current[k][4] = alpha * g[k];
+            }
+        }
+        lambda1 = -md.r / md.l;
+        lambda2 = -dr / md.l;
+        double[] idc = dcCurrent();
+        uUp = new double[NB];
+        uDown = new double[NB];
+        double kUp = (double) down / n;
+        for (int j = 0; j < NB; j++) {
+            uUp[j] = rDc * kUp * idc[j];
+            uDown[j] = uUp[j] - rDc * idc[j];
+        }
+        uUp[0] += ac / n;
+        uUp[1] += bc / n;
+        uUp[2] += down * md.v0 / n;
+        uDown[0] += ac / n;
+        uDown[1] += bc / n;
+        uDown[2] += down * md.v0 / n - md.v0;
+    }
+
+    boolean off() {
+        return nUp + nDown == 0;
+    }
+
+    int conducting() {
+        return nUp + nDown;
+    }
+
+    void basis(double tau, double[] out) {
+        double th = md.w * (t0 + tau);
+        out[0] = Math.cos(th);
+        out[1] = Math.sin(th);
+        out[2] = 1;
+        out[3] = Math.exp(lambda1 * tau);
+        out[4] = Math.exp(lambda2 * tau);
+    }
+
+    static double dot(double[] c, double[] basis) {
+        return c[0] * basis[0] + c[1] * basis[1] + c[2] * basis[2] + c[3] * basis[3] + c[4] * basis[4];
+    }
+
+    void currentsAt(double tau, double[] out) {
+        double[] bs = new double[NB];
+        basis(tau, bs);
+        for (int k = 0; k < md.m; k++) {
+            out[k] = sign[k] == 0 ? 0 : dot(current[k], bs);
+        }
+    }
+
+    /** Coefficients of the EMF of branch k. */
+    double[] emf(int k) {
+        return new double[] {md.a[k], md.b[k], 0, 0, 0};
+    }
+
+    /** Coefficients of the DC current (sum of the upper-rail branch currents). */
+    double[] dcCurrent() {
+        double[] c = new double[NB];
+        for (int k = 0; k < md.m; k++) {
+            if (sign[k] > 0) {
+                for (int j = 0; j < NB; j++) {
+                    c[j] += current[k][j];
+                }
+            }
+        }
+        return c;
+    }
+
+    /** Coefficients of the alternator terminal potential of branch k against the star point. */
+    double[] terminal(int k) {
+        if (sign[k] == 0) {
+            return emf(k);
+        }
+        double[] u = (sign[k] > 0 ? uUp : uDown).clone();
+        for (int j = 0; j < NB; j++) {
+            u[j] += md.rCable * current[k][j];
+        }
+        return u;
+    }
+}

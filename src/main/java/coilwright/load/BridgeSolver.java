@@ -1,0 +1,192 @@
+package coilwright.load;
+
+/**
+ * Periodic steady state of a diode bridge charging a battery from a sinusoidal source behind R and L.
+ * <p>
+ * Method: the circuit is piecewise linear; within each conduction state the branch currents are exact sums
+ * of exponentials and sinusoids ({@link BridgeSegment}); switching events are located on these closed forms
+ * ({@link BridgeSweep}). The waveform repeats every 60 electrical degrees with the phases rotated and negated
+ * (three-phase) or every half period negated (single-phase), so the periodic state solves
+ * Map(x0) = P x0 over one such interval. Discontinuous conduction is found directly (an interval with no
+ * diode conducting fixes the state to zero); otherwise the equation is solved by Newton's method with a
+ * finite-difference Jacobian, started from a few fixed-point sweeps and anchored inside an interval where
+ * the most diodes conduct (where the map is smooth). Shooting for periodic solutions of switched circuits
+ * follows Aprille and Trick (1972); the exact piecewise solution is the classical treatment of the bridge
+ * in, e.g., Mohan, Undeland and Robbins, "Power Electronics", 2003, ch. 5.
+ */
+public final class BridgeSolver {
+    private static final int FIXED_POINT_SWEEPS = 2;
+    private static final int MAX_NEWTON = 60;
+    private static final double NEWTON_TOLERANCE = 1e-13;
+    private static final double ACCEPT_TOLERANCE = 1e-9;
+
+    private BridgeSolver() {
+    }
+
+    /**
+     * Solves one operating point.
+     *
+     * @param circuit the circuit (validated)
+     * @return period averages; exactly zero currents when sqrt(2)*E_LL (three-phase) or sqrt(2)*E
+     *         (single-phase) does not exceed Vb + 2 Vd
+     * @throws IllegalStateException if the periodic solution cannot be found (not expected for valid input)
+     */
+    public static BridgeOperatingPoint solve(BridgeCircuit circuit) {
+        if (circuit.peakDrivingEmfV() <= circuit.thresholdV()) {
+            return BridgeResults.belowCutIn(circuit);
+        }
+        BridgeModel md = new BridgeModel(circuit);
+        return BridgeResults.assemble(circuit, md, periodic(md));
+    }
+
+    static BridgeSweep periodic(BridgeModel md) {
+        int m = md.m;
+        BridgeSweep sw = new BridgeSweep(md, 0, new double[m]);
+        for (int it = 0; it < FIXED_POINT_SWEEPS; it++) {
+            int off = longestOff(sw);
+            if (off >= 0) {
+                BridgeSegment s = sw.segments.get(off);
+                BridgeSweep fromZero = new BridgeSweep(md, s.t0 + sw.durations.get(off) / 2, new double[m]);
+                if (endsOff(fromZero)) {
+                    return fromZero;
+                }
+                sw = fromZero;
+            }
+            double[] next = new double[m];
+            md.unshift(sw.end, next);
+            sw = new BridgeSweep(md, sw.t0, next);
+        }
+        return newton(md, sw);
+    }
+
+    private static BridgeSweep newton(BridgeModel md, BridgeSweep guess) {
+        int best = 0;
+        for (int i = 1; i < guess.segments.size(); i++) {
+            int ci = guess.segments.get(i).conducting();
+            int cb = guess.segments.get(best).conducting();
+            if (ci > cb || ci == cb && guess.durations.get(i) > guess.durations.get(best)) {
+                best = i;
+            }
+        }
+        BridgeSegment anchor = guess.segments.get(best);
+        double half = guess.durations.get(best) / 2;
+        double ta = anchor.t0 + half;
+        double[] xa = new double[md.m];
+        anchor.currentsAt(half, xa);
+        int n = md.m - 1;
+        double[] y = java.util.Arrays.copyOf(xa, n);
+        double scale = md.currentScaleA();
+        Residual r = new Residual(md, ta, y);
+        double[][] jac = null;
+        for (int it = 0; it < MAX_NEWTON; it++) {
+            double size = Math.max(norm(y), 1e-3 * scale);
+            if (norm(r.value) <= NEWTON_TOLERANCE * size
+                    || it >= MAX_NEWTON / 2 && norm(r.value) <= ACCEPT_TOLERANCE * size) {
+                return r.sweep;
+            }
+            if (jac == null) {
+                jac = jacobian(md, ta, y, r, size);
+            }
+            double[] step = solveSmall(jac, r.value);
+            Residual next = null;
+            for (double lambda = 1; lambda > 1e-3; lambda /= 2) {
+                double[] yt = y.clone();
+                for (int i = 0; i < n; i++) {
+                    yt[i] -= lambda * step[i];
+                }
+                Residual trial = new Residual(md, ta, yt);
+                if (norm(trial.value) < norm(r.value)) {
+                    next = trial;
+                    break;
+                }
+            }
+            if (next == null) {
+                if (norm(r.value) <= ACCEPT_TOLERANCE * size) {
+                    return r.sweep;
+                }
+                double[] fp = new double[md.m];
+                md.unshift(r.sweep.end, fp);
+                next = new Residual(md, ta, java.util.Arrays.copyOf(fp, n));
+            }
+            if (norm(next.value) > 0.1 * norm(r.value)) {
+                jac = null;
+            }
+            r = next;
+            y = next.y;
+        }
+        throw new IllegalStateException("bridge solver: no periodic solution after " + MAX_NEWTON
+                + " Newton steps (residual " + norm(r.value) + " A)");
+    }
+
+    /** Forward-difference Jacobian of the residual (reused while it keeps converging fast: a chord method). */
+    private static double[][] jacobian(BridgeModel md, double ta, double[] y, Residual r, double size) {
+        int n = y.length;
+        double[][] jac = new double[n][n];
+        for (int j = 0; j < n; j++) {
+            double[] yj = y.clone();
+            double h = 1e-7 * size;
+            yj[j] += h;
+            Residual rj = new Residual(md, ta, yj);
+            for (int i = 0; i < n; i++) {
+                jac[i][j] = (rj.value[i] - r.value[i]) / h;
+            }
+        }
+        return jac;
+    }
+
+    /** Map(x0) unshifted minus x0, on the independent branch currents. */
+    private static final class Residual {
+        final double[] y;
+        final double[] value;
+        final BridgeSweep sweep;
+
+        Residual(BridgeModel md, double t0, double[] y) {
+            this.y = y;
+            double[] x0 = new double[md.m];
+            double sum = 0;
+            for (int i = 0; i < y.length; i++) {
+                x0[i] = y[i];
+                sum += y[i];
+            }
+            x0[md.m - 1] = -sum;
+            sweep = new BridgeSweep(md, t0, x0);
+            double[] back = new double[md.m];
+            md.unshift(sweep.end, back);
+            value = new double[y.length];
+            for (int i = 0; i < y.length; i++) {
+                value[i] = back[i] - y[i];
+            }
+        }
+    }
+
+    private static double[] solveSmall(double[][] a, double[] b) {
+        if (a.length == 1) {
+            return new double[] {b[0] / a[0][0]};
+        }
+        double det = a[0][0] * a[1][1] - a[0][1] * a[1][0];
+        return new double[] {(b[0] * a[1][1] - a[0][1] * b[1]) / det, (a[0][0] * b[1] - a[1][0] * b[0]) / det};
+    }
+
+    private static double norm(double[] v) {
+        double n = 0;
+        for (double d : v) {
+            n = Math.max(n, Math.abs(d));
+        }
+        return n;
+    }
+
+    private static int longestOff(BridgeSweep sw) {
+        int idx = -1;
+        for (int i = 0; i < sw.segments.size(); i++) {
+            if (sw.segments.get(i).off() && sw.durations.get(i) > 0
+                    && (idx < 0 || sw.durations.get(i) > sw.durations.get(idx))) {
+                idx = i;
+            }
+        }
+        return idx;
+    }
+
+    private static boolean endsOff(BridgeSweep sw) {
+        return sw.segments.get(sw.segments.size() - 1).off();
+    }
+}

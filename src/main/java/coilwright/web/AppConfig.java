@@ -1,0 +1,94 @@
+package coilwright.web;
+
+import java.nio.file.Path;
+import java.util.Map;
+
+/**
+ * Settings of one running service. Each comes from an environment variable or the matching
+ * command-line option (the option wins): {@code COILWRIGHT_PORT}/{@code --port} (default 7070),
+ * {@code COILWRIGHT_DATA_DIR}/{@code --data-dir} (default {@code ./data}), {@code COILWRIGHT_DB_URL}/
+ * {@code --db-url} (default empty: an embedded database in the data directory) and
+ * {@code COILWRIGHT_MAX_BODY_BYTES}/{@code --max-body-bytes} (default 1 MiB; larger bodies get 413).
+ *
+ * @param port            TCP port, 0 to 65535 (0 = any free port)
+ * @param dataDir         directory for the embedded database and other files
+ * @param dbUrl           JDBC URL of an external database, or empty for the embedded one
+ * @param maxBodyBytes    largest accepted request body in bytes
+ */
+public record AppConfig(int port, Path dataDir, String dbUrl, long maxBodyBytes) {
+    public static final int DEFAULT_PORT = 7070;
+    public static final long DEFAULT_MAX_BODY_BYTES = 1024 * 1024;
+
+    public AppConfig {
+        if (port < 0 || port > 65535) {
+            throw new IllegalArgumentException("port = " + port + ": must be between 0 and 65535");
+        }
+        if (maxBodyBytes < 1024) {
+            throw new IllegalArgumentException("maxBodyBytes = " + maxBodyBytes + ": must be >= 1024");
+        }
+        dataDir = dataDir == null ? Path.of("data") : dataDir;
+        dbUrl = dbUrl == null ? "" : dbUrl;
+    }
+
+    /** The defaults: port 7070, {@code ./data}, embedded database, 1 MiB bodies. */
+    public static AppConfig defaults() {
+        return new AppConfig(DEFAULT_PORT, Path.of("data"), "", DEFAULT_MAX_BODY_BYTES);
+    }
+
+    public AppConfig withPort(int newPort) {
+        return new AppConfig(newPort, dataDir, dbUrl, maxBodyBytes);
+    }
+
+    public AppConfig withDataDir(Path dir) {
+        return new AppConfig(port, dir, dbUrl, maxBodyBytes);
+    }
+
+    /**
+     * Reads the environment, then the options ({@code --name value} or {@code --name=value}).
+     *
+     * @throws IllegalArgumentException for an unknown option, a missing value or a value that is not valid
+     */
+    public static AppConfig from(Map<String, String> env, String... args) {
+        String port = env.getOrDefault("COILWRIGHT_PORT", Integer.toString(DEFAULT_PORT));
+        String dataDir = env.getOrDefault("COILWRIGHT_DATA_DIR", "data");
+        String dbUrl = env.getOrDefault("COILWRIGHT_DB_URL", "");
+        String maxBody = env.getOrDefault("COILWRIGHT_MAX_BODY_BYTES", Long.toString(DEFAULT_MAX_BODY_BYTES));
+        for (int i = 0; i < args.length; i++) {
+            String arg = args[i];
+            String name = arg.contains("=") ? arg.substring(0, arg.indexOf('=')) : arg;
+            String value;
+            if (arg.contains("=")) {
+                value = arg.substring(arg.indexOf('=') + 1);
+            } else if (i + 1 < args.length) {
+                value = args[++i];
+            } else {
+                throw new IllegalArgumentException(name + " needs a value");
+            }
+            switch (name) {
+                case "--port" -> port = value;
+                case "--data-dir" -> dataDir = value;
+                case "--db-url" -> dbUrl = value;
+                case "--max-body-bytes" -> maxBody = value;
+                default -> throw new IllegalArgumentException("unknown option " + name
+                        + " (known: --port, --data-dir, --db-url, --max-body-bytes)");
+            }
+        }
+        return new AppConfig(number("port", port), Path.of(dataDir), dbUrl, longNumber("max-body-bytes", maxBody));
+    }
+
+    private static int number(String name, String text) {
+        long v = longNumber(name, text);
+        if (v != (int) v) {
+            throw new IllegalArgumentException(name + " = " + text + ": must be between 0 and 65535");
+        }
+        return (int) v;
+    }
+
+    private static long longNumber(String name, String text) {
+        try {
+            return Long.parseLong(text.trim());
+        } catch (NumberFormatException e) {
+            throw new IllegalArgumentException(name + " = " + text + ": must be a whole number");
+        }
+    }
+}

@@ -1,0 +1,93 @@
+package coilwright.web;
+
+import com.fasterxml.jackson.core.JsonProcessingException;
+import coilwright.validation.InfeasibleDesignException;
+import coilwright.validation.InvalidInputException;
+import io.javalin.config.RoutesConfig;
+import io.javalin.http.Context;
+import io.javalin.http.HttpResponseException;
+import io.javalin.http.HttpStatus;
+import java.util.Map;
+import java.util.UUID;
+import org.slf4j.Logger;
+import org.slf4j.LoggerFactory;
+
+/**
+ * Every exception-to-response rule of the service, in one place. Under {@code /api/} (and for
+ * {@code /health}, {@code /metrics}) the answer is RFC 9457 {@code application/problem+json}; elsewhere
+ * the same problem is rendered as the HTML error page. An unexpected exception becomes a 500 with a
+ * generic message and a log id; no stack trace or exception text ever reaches the body.
+ */
+public final class ErrorMapping {
+    private static final Logger LOG = LoggerFactory.getLogger(ErrorMapping.class);
+
+    private ErrorMapping() {
+    }
+
+    public static void register(RoutesConfig routes) {
+        routes.exception(InvalidInputException.class, (e, ctx) -> respond(ctx,
+                problem("invalid-input", 400, e.errors().size() == 1 ? "1 field is invalid."
+                        : e.errors().size() + " fields are invalid.", ctx).withErrors(e.errors())));
+        routes.exception(MalformedJsonException.class, (e, ctx) ->
+                respond(ctx, problem("malformed-json", 400, e.getMessage(), ctx)));
+        routes.exception(InfeasibleDesignException.class, (e, ctx) ->
+                respond(ctx, problem("infeasible-design", 422, e.getMessage(), ctx).withField(e.field())));
+        routes.exception(NotFoundException.class, (e, ctx) -> respond(ctx, problem("not-found", 404, e.getMessage(), ctx)));
+        routes.exception(ForbiddenException.class, (e, ctx) -> respond(ctx, problem("forbidden", 403, e.getMessage(), ctx)));
+        routes.exception(HttpResponseException.class, (e, ctx) -> respond(ctx, fromStatus(e.getStatus(), ctx)));
+        routes.exception(Exception.class, (e, ctx) -> unexpected(e, ctx));
+        routes.error(404, ctx -> respondUnlessDone(ctx, 404));
+        routes.error(405, ctx -> respondUnlessDone(ctx, 405));
+    }
+
+    private static void unexpected(Exception e, Context ctx) {
+        String id = UUID.randomUUID().toString().substring(0, 8);
+        LOG.error("unexpected error {} on {} {}", id, ctx.method(), ctx.path(), e);
+        respond(ctx, problem("internal-error", 500,
+                "An unexpected error occurred. Please report it with the id " + id + ".", ctx).withId(id));
+    }
+
+    private static void respondUnlessDone(Context ctx, int status) {
+        String type = ctx.res().getContentType();
+        if (type == null || !(type.startsWith(Problem.MEDIA_TYPE) || type.startsWith("text/html"))) {
+            respond(ctx, fromStatus(status, ctx));
+        }
+    }
+
+    private static Problem fromStatus(int status, Context ctx) {
+        String detail = switch (status) {
+            case 404 -> "There is nothing at " + ctx.path() + ".";
+            case 405 -> ctx.method().name() + " is not allowed on " + ctx.path() + ".";
+            case 413 -> "The request body is larger than the limit of this service.";
+            default -> HttpStatus.forStatus(status).getMessage() + ".";
+        };
+        return problem(slug(status), status, detail, ctx);
+    }
+
+    private static Problem problem(String slug, int status, String detail, Context ctx) {
+        return Problem.of(slug, HttpStatus.forStatus(status).getMessage(), status, detail, ctx.path());
+    }
+
+    private static String slug(int status) {
+        return HttpStatus.forStatus(status).getMessage().toLowerCase(java.util.Locale.ROOT).replace(' ', '-');
+    }
+
+    /** Writes the problem as JSON or as the HTML error page, by path. */
+    static void respond(Context ctx, Problem problem) {
+        ctx.status(problem.status());
+        if (Route.isApiPath(ctx.path())) {
+            try {
+                ctx.contentType(Problem.MEDIA_TYPE).result(Json.mapper().writeValueAsString(problem));
+            } catch (JsonProcessingException e) {
+                ctx.contentType("text/plain").result(problem.title());
+            }
+            return;
+        }
+        try {
+            ctx.contentType("text/html; charset=utf-8").render("error", Map.of("problem", problem));
+        } catch (RuntimeException e) {
+            LOG.error("error page failed for {}", ctx.path(), e);
+            ctx.contentType("text/plain; charset=utf-8").result(problem.status() + " " + problem.title());
+        }
+    }
+}

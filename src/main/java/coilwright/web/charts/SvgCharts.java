@@ -1,0 +1,122 @@
+package coilwright.web.charts;
+
+import java.awt.BasicStroke;
+import java.awt.Color;
+import java.awt.Font;
+import java.awt.Rectangle;
+import java.util.List;
+import java.util.concurrent.atomic.AtomicLong;
+import org.jfree.chart.ChartFactory;
+import org.jfree.chart.JFreeChart;
+import org.jfree.chart.axis.NumberAxis;
+import org.jfree.chart.axis.ValueAxis;
+import org.jfree.chart.plot.PlotOrientation;
+import org.jfree.chart.plot.XYPlot;
+import org.jfree.chart.renderer.xy.XYLineAndShapeRenderer;
+import org.jfree.chart.text.TextUtils;
+import org.jfree.data.xy.XYSeries;
+import org.jfree.data.xy.XYSeriesCollection;
+import org.jfree.svg.SVGGraphics2D;
+
+/**
+ * Server-side SVG line charts drawn by JFreeChart into JFreeSVG: inline-able {@code <svg>} elements with
+ * generic font families only (no font files, works offline). Each chart gets its own id and defs prefix,
+ * so several can sit on one page. Thread-safe.
+ */
+public final class SvgCharts {
+    /** Colour-blind-aware palette, dark enough for print. */
+    private static final List<Color> PALETTE = List.of(new Color(0x9a4311), new Color(0x1a5fb4),
+            new Color(0x2e7d32), new Color(0x6a1b9a), new Color(0x00838f), new Color(0x5d4037));
+    private static final String FONT = Font.SANS_SERIF;
+    private static final AtomicLong IDS = new AtomicLong();
+
+    static {
+        if (System.getProperty("java.awt.headless") == null) {
+            System.setProperty("java.awt.headless", "true");
+        }
+        // Rotated labels as real <text> (with a transform), not glyph outlines: searchable, smaller, printable.
+        TextUtils.setUseDrawRotatedStringWorkaround(false);
+    }
+
+    private SvgCharts() {
+    }
+
+    /** The chart as one {@code <svg>} element with {@code role="img"} and a {@code <title>}. */
+    public static String lineChart(ChartSpec spec) {
+        JFreeChart chart = ChartFactory.createXYLineChart(spec.title(), spec.x().text(), spec.left().text(),
+                dataset(spec.leftSeries()), PlotOrientation.VERTICAL, true, false, false);
+        XYPlot plot = chart.getXYPlot();
+        style(chart, plot);
+        plot.setRenderer(0, renderer(0, spec.leftSeries().size(), false));
+        spec.right().ifPresent(axis -> {
+            NumberAxis rightAxis = new NumberAxis(axis.text());
+            rightAxis.setAutoRangeIncludesZero(false);
+            styleAxis(rightAxis);
+            plot.setRangeAxis(1, rightAxis);
+            plot.setDataset(1, dataset(spec.rightSeries()));
+            plot.mapDatasetToRangeAxis(1, 1);
+            plot.setRenderer(1, renderer(spec.leftSeries().size(), spec.rightSeries().size(), true));
+        });
+        String id = "chart-" + IDS.incrementAndGet();
+        SVGGraphics2D g2 = new SVGGraphics2D(spec.widthPx(), spec.heightPx());
+        g2.setDefsKeyPrefix(id + "-");
+        g2.setGeomDoubleConverter(SvgCharts::twoDecimals);
+        chart.draw(g2, new Rectangle(0, 0, spec.widthPx(), spec.heightPx()));
+        String svg = g2.getSVGElement(id);
+        int open = svg.indexOf('>', svg.indexOf("<svg"));
+        return svg.substring(0, open) + " role=\"img\" aria-labelledby=\"" + id + "-title\">"
+                + "<title id=\"" + id + "-title\">" + escape(spec.title()) + "</title>" + svg.substring(open + 1);
+    }
+
+    private static XYSeriesCollection dataset(List<Series> series) {
+        XYSeriesCollection data = new XYSeriesCollection();
+        for (Series s : series) {
+            XYSeries xy = new XYSeries(s.name(), false, true);
+            for (int i = 0; i < s.x().length; i++) {
+                xy.add(s.x()[i], s.y()[i], false);
+            }
+            data.addSeries(xy);
+        }
+        return data;
+    }
+
+    private static XYLineAndShapeRenderer renderer(int firstColour, int count, boolean dashed) {
+        XYLineAndShapeRenderer r = new XYLineAndShapeRenderer(true, false);
+        for (int i = 0; i < count; i++) {
+            r.setSeriesPaint(i, PALETTE.get((firstColour + i) % PALETTE.size()));
+            r.setSeriesStroke(i, dashed
+                    ? new BasicStroke(2.2f, BasicStroke.CAP_BUTT, BasicStroke.JOIN_ROUND, 1f, new float[] {7f, 4f}, 0f)
+                    : new BasicStroke(2.2f));
+        }
+        return r;
+    }
+
+    private static void style(JFreeChart chart, XYPlot plot) {
+        chart.setBackgroundPaint(Color.WHITE);
+        chart.setAntiAlias(true);
+        chart.getTitle().setFont(new Font(FONT, Font.BOLD, 16));
+        chart.getLegend().setItemFont(new Font(FONT, Font.PLAIN, 13));
+        plot.setBackgroundPaint(Color.WHITE);
+        plot.setDomainGridlinePaint(new Color(0xc9cfd4));
+        plot.setRangeGridlinePaint(new Color(0xc9cfd4));
+        plot.setOutlinePaint(new Color(0x8a949c));
+        styleAxis(plot.getDomainAxis());
+        styleAxis(plot.getRangeAxis());
+    }
+
+    private static void styleAxis(ValueAxis axis) {
+        axis.setLabelFont(new Font(FONT, Font.PLAIN, 14));
+        axis.setTickLabelFont(new Font(FONT, Font.PLAIN, 12));
+        axis.setLabelPaint(new Color(0x1c2329));
+        axis.setTickLabelPaint(new Color(0x1c2329));
+    }
+
+    /** Coordinates to 0.01 px: a third smaller SVG, no visible change. */
+    private static String twoDecimals(double v) {
+        return Double.toString(Math.rint(v * 100.0) / 100.0);
+    }
+
+    private static String escape(String text) {
+        return text.replace("&", "&amp;").replace("<", "&lt;").replace(">", "&gt;").replace("\"", "&quot;");
+    }
+}

@@ -1,0 +1,89 @@
+package coilwright.web.charts;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertNotEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.ByteArrayInputStream;
+import java.nio.charset.StandardCharsets;
+import java.util.List;
+import java.util.stream.IntStream;
+import javax.xml.parsers.DocumentBuilderFactory;
+import org.junit.jupiter.api.Test;
+import org.w3c.dom.Document;
+
+class SvgChartsTest {
+    private static final double[] SPEED = IntStream.rangeClosed(0, 40).mapToDouble(i -> i * 25.0).toArray();
+
+    private static ChartSpec emfChart() {
+        double[] emf = IntStream.rangeClosed(0, 40).mapToDouble(i -> i * 25.0 * 0.05).toArray();
+        double[] terminal = IntStream.rangeClosed(0, 40).mapToDouble(i -> Math.max(0, i * 25.0 * 0.05 - 3)).toArray();
+        double[] power = IntStream.rangeClosed(0, 40).mapToDouble(i -> i * i * 0.9).toArray();
+        return ChartSpec.of("EMF & terminal voltage <test>", new ChartSpec.Axis("Speed", "rpm"),
+                        new ChartSpec.Axis("Voltage", "V"),
+                        List.of(new Series("EMF (line)", SPEED, emf), new Series("Terminal voltage", SPEED, terminal)))
+                .withRightAxis(new ChartSpec.Axis("Battery power", "W"), List.of(new Series("Power to battery", SPEED, power)));
+    }
+
+    private static Document parse(String svg) throws Exception {
+        DocumentBuilderFactory f = DocumentBuilderFactory.newInstance();
+        f.setNamespaceAware(true);
+        return f.newDocumentBuilder().parse(new ByteArrayInputStream(svg.getBytes(StandardCharsets.UTF_8)));
+    }
+
+    @Test
+    void renders_well_formed_svg_with_series_names_and_axis_labels() throws Exception {
+        String svg = SvgCharts.lineChart(emfChart());
+        Document doc = parse(svg);
+        assertEquals("svg", doc.getDocumentElement().getLocalName());
+        String text = doc.getDocumentElement().getTextContent();
+        for (String expected : List.of("EMF (line)", "Terminal voltage", "Power to battery",
+                "Speed (rpm)", "Voltage (V)", "Battery power (W)", "EMF & terminal voltage <test>")) {
+            assertTrue(text.contains(expected), "SVG text contains " + expected);
+        }
+    }
+
+    @Test
+    void uses_no_external_resources_and_only_generic_fonts() {
+        String svg = SvgCharts.lineChart(emfChart());
+        assertFalse(svg.contains("@font-face"));
+        assertFalse(svg.contains("xlink:href=\"http"));
+        assertFalse(svg.contains("url(http"));
+        assertTrue(svg.contains("sans-serif"), "generic family");
+    }
+
+    @Test
+    void gives_each_chart_its_own_id_so_several_fit_on_one_page() {
+        String a = SvgCharts.lineChart(emfChart());
+        String b = SvgCharts.lineChart(emfChart());
+        String idA = a.substring(a.indexOf("id=\"") + 4, a.indexOf('"', a.indexOf("id=\"") + 4));
+        String idB = b.substring(b.indexOf("id=\"") + 4, b.indexOf('"', b.indexOf("id=\"") + 4));
+        assertNotEquals(idA, idB);
+        assertTrue(a.contains("role=\"img\""));
+    }
+
+    @Test
+    void refuses_NaN_points_and_mismatched_lengths() {
+        assertThrows(IllegalArgumentException.class, () -> new Series("s", new double[] {1, 2}, new double[] {1, Double.NaN}));
+        assertThrows(IllegalArgumentException.class, () -> new Series("s", new double[] {1, 2}, new double[] {1}));
+        assertThrows(IllegalArgumentException.class, () -> ChartSpec.of("t", new ChartSpec.Axis("x", "m"),
+                new ChartSpec.Axis("y", "m"), List.of()));
+    }
+
+    @Test
+    void renders_four_charts_fast_enough_for_one_results_page() {
+        for (int i = 0; i < 10; i++) {
+            SvgCharts.lineChart(emfChart());
+        }
+        int n = 40;
+        long start = System.nanoTime();
+        for (int i = 0; i < n; i++) {
+            SvgCharts.lineChart(emfChart());
+        }
+        double msPerChart = (System.nanoTime() - start) / 1e6 / n;
+        System.out.printf("SvgCharts: %.2f ms per chart (41 points x 3 series, two y axes)%n", msPerChart);
+        assertTrue(msPerChart < 100, "ms per chart = " + msPerChart);
+    }
+}
