@@ -18,12 +18,15 @@ import java.util.Optional;
  * @param relativeDeviation              achieved / wanted - 1 (the ranking key is its magnitude)
  * @param lineVoltageAtTargetSpeedRmsV   open-circuit line voltage (rms) at the target speed, V
  * @param phaseResistanceOhm             phase resistance at the target's winding temperature, Ohm (if measured)
+ * @param output                         charging at the target speed (battery target with measured resistance and
+ *                                       inductance only)
  * @param description                    what to do, in a sentence
  * @param notes                          cautions that apply
  */
 public record Reconnection(Connection connection, int parallelPaths, boolean unchanged, double keLineRmsVPerRpm,
                            double achieved, double relativeDeviation, double lineVoltageAtTargetSpeedRmsV,
-                           Optional<Double> phaseResistanceOhm, String description, List<String> notes) {
+                           Optional<Double> phaseResistanceOhm, Optional<OutputEstimate> output, String description,
+                           List<String> notes) {
     public Reconnection {
         notes = List.copyOf(notes);
     }

@@ -64,7 +64,8 @@ public final class RewindPlanner {
                         : "voltage: open-circuit line voltage = Ke_LL x n",
                 machine.coilWindow() == null
                         ? "coil window unknown: fill is given relative to the present coil (wireAreaRatio; 1 = as now)"
-                        : "fill checked against the stated coil window");
+                        : "fill checked against the stated coil window",
+                outputNote(ch, target));
         return new RewindPlan(ch, target, wantedKe, ch.keLineRmsVPerRpm().relativeUncertainty(), reconnections,
                 rewinds, notes);
     }
@@ -75,6 +76,17 @@ public final class RewindPlanner {
      */
     static long rankKey(double relativeDeviation) {
         return Math.round(Math.abs(relativeDeviation) / RANK_RESOLUTION);
+    }
+
+    private static String outputNote(MachineCharacterisation ch, RewindTarget target) {
+        if (target.kind() != RewindTarget.Kind.BATTERY_CUT_IN) {
+            return "output at the target speed is estimated for a battery target only";
+        }
+        if (ch.phaseResistanceOhm().isEmpty() || ch.phaseInductanceH().isEmpty()) {
+            return "output at the target speed not estimated: it needs the line-to-line resistance and inductance";
+        }
+        return "output at the target speed: periodic steady state of the bridge into the battery (no cables, no"
+                + " battery resistance), inductance scaled with the series turns squared";
     }
 
     private static List<Connection> connections(int phases) {
@@ -101,8 +113,10 @@ public final class RewindPlanner {
         String what = unchanged ? "as now: " + text(conn, paths)
                 : "reconnect the existing coils " + text(conn, paths) + " (now " + text(machine.connection(),
                 machine.parallelPaths()) + ")";
+        Optional<OutputEstimate> output = OutputEstimator.at(machine, ch, target, conn, ke,
+                ch.coilsPerPhase() * machine.turnsPerCoil() / paths, r);
         return new Reconnection(conn, paths, unchanged, ke, achieved, achieved / target.wanted() - 1,
-                ke * target.targetSpeedRpm(), r, what, notes(ch, conn));
+                ke * target.targetSpeedRpm(), r, output, what, notes(ch, conn));
     }
 
     private static List<RewindOption> rewinds(ExistingMachine machine, MachineCharacterisation ch, RewindTarget target,
@@ -119,7 +133,7 @@ public final class RewindPlanner {
             double ke = perTurnKe * turns;
             double achieved = target.achieved(ke);
             double area = machine.wire().conductorCopperAreaM2() * machine.turnsPerCoil() / turns;
-            List<WireChoice> wires = WireChoices.forArea(machine, ch, turns, paths, area, target.windingTemperatureC());
+            List<WireChoice> wires = WireChoices.forArea(machine, ch, target, conn, turns, paths, ke, area);
             out.add(new RewindOption(conn, paths, turns, exact, ch.coilsPerPhase() * turns / paths, ke, achieved,
                     achieved / target.wanted() - 1, ke * target.targetSpeedRpm(), area, wires, notes(ch, conn)));
         }

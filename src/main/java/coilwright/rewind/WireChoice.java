@@ -18,7 +18,10 @@ import java.util.Optional;
  * @param phaseResistanceOhm   predicted phase resistance at the target's winding temperature from the measured
  *                             mean turn length, Ohm (if a resistance was measured)
  * @param fill                 fill check against the coil window (if the window was given)
+ * @param output               charging at the target speed with this wire (battery target with measured
+ *                             resistance and inductance only)
  */
 public record WireChoice(String role, WireSpec wire, double conductorCopperAreaM2, double copperAreaRatio,
-                         double wireAreaRatio, Optional<Double> phaseResistanceOhm, Optional<FillCheck> fill) {
+                         double wireAreaRatio, Optional<Double> phaseResistanceOhm, Optional<FillCheck> fill,
+                         Optional<OutputEstimate> output) {
 }

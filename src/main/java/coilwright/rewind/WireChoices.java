@@ -4,6 +4,7 @@ import coilwright.conductor.Copper;
 import coilwright.conductor.FillCheck;
 import coilwright.conductor.WireCatalogue;
 import coilwright.conductor.WireSpec;
+import coilwright.machine.Connection;
 
 import java.util.ArrayList;
 import java.util.List;
@@ -23,26 +24,36 @@ final class WireChoices {
      * The nearest AWG and metric sizes below and above the wanted conductor area, then up to
      * {@value #STRAND_OPTIONS_LISTED} multi-strand alternatives within +-5 %.
      */
-    static List<WireChoice> forArea(ExistingMachine machine, MachineCharacterisation ch, int turnsPerCoil,
-                                    int parallelPaths, double areaM2, double temperatureC) {
+    static List<WireChoice> forArea(ExistingMachine machine, MachineCharacterisation ch, RewindTarget target,
+                                    Connection conn, int turnsPerCoil, int parallelPaths, double keLineRmsVPerRpm,
+                                    double areaM2) {
+        Option o = new Option(machine, ch, target, conn, turnsPerCoil, parallelPaths, keLineRmsVPerRpm);
         List<WireChoice> out = new ArrayList<>();
         WireCatalogue.SizeBracket awg = WireCatalogue.nearestAwgBelowAndAbove(areaM2);
         WireCatalogue.SizeBracket metric = WireCatalogue.nearestMetricBelowAndAbove(areaM2);
-        awg.below().ifPresent(w -> out.add(choice("AWG below", w, machine, ch, turnsPerCoil, parallelPaths, temperatureC)));
-        awg.above().ifPresent(w -> out.add(choice("AWG above", w, machine, ch, turnsPerCoil, parallelPaths, temperatureC)));
-        metric.below().ifPresent(w -> out.add(choice("metric below", w, machine, ch, turnsPerCoil, parallelPaths, temperatureC)));
-        metric.above().ifPresent(w -> out.add(choice("metric above", w, machine, ch, turnsPerCoil, parallelPaths, temperatureC)));
+        awg.below().ifPresent(w -> out.add(choice("AWG below", w, o)));
+        awg.above().ifPresent(w -> out.add(choice("AWG above", w, o)));
+        metric.below().ifPresent(w -> out.add(choice("metric below", w, o)));
+        metric.above().ifPresent(w -> out.add(choice("metric above", w, o)));
         WireCatalogue.strandAlternatives(areaM2, MAX_STRANDS).stream()
-                .filter(o -> o.wire().strandsInHand() > 1)
+                .filter(s -> s.wire().strandsInHand() > 1)
                 .sorted((a, b) -> Double.compare(Math.abs(a.relativeDeviation()), Math.abs(b.relativeDeviation())))
                 .limit(STRAND_OPTIONS_LISTED)
-                .forEach(o -> out.add(choice("strands in hand", o.wire(), machine, ch, turnsPerCoil, parallelPaths,
-                        temperatureC)));
+                .forEach(s -> out.add(choice("strands in hand", s.wire(), o)));
         return out;
     }
 
-    private static WireChoice choice(String role, WireSpec wire, ExistingMachine machine, MachineCharacterisation ch,
-                                     int turnsPerCoil, int parallelPaths, double temperatureC) {
+    /** The option a wire is chosen for. */
+    private record Option(ExistingMachine machine, MachineCharacterisation ch, RewindTarget target, Connection conn,
+                          int turnsPerCoil, int parallelPaths, double keLineRmsVPerRpm) {
+    }
+
+    private static WireChoice choice(String role, WireSpec wire, Option o) {
+        ExistingMachine machine = o.machine();
+        int turnsPerCoil = o.turnsPerCoil();
+        int parallelPaths = o.parallelPaths();
+        MachineCharacterisation ch = o.ch();
+        double temperatureC = o.target().windingTemperatureC();
         WireSpec old = machine.wire();
         double copperRatio = turnsPerCoil * wire.conductorCopperAreaM2()
                 / (machine.turnsPerCoil() * old.conductorCopperAreaM2());
@@ -51,7 +62,10 @@ final class WireChoices {
         Optional<Double> r = ch.meanTurnLengthM().map(mlt -> phaseResistanceOhm(turnsPerCoil, ch.coilsPerPhase(),
                 parallelPaths, mlt.value(), wire, temperatureC));
         Optional<FillCheck> fill = machine.coilWindowIfKnown().map(win -> FillCheck.of(turnsPerCoil, wire, win));
-        return new WireChoice(role, wire, wire.conductorCopperAreaM2(), copperRatio, wireRatio, r, fill);
+        int nPh = ch.coilsPerPhase() * turnsPerCoil / parallelPaths;
+        Optional<OutputEstimate> output = OutputEstimator.at(machine, ch, o.target(), o.conn(), o.keLineRmsVPerRpm(),
+                nPh, r);
+        return new WireChoice(role, wire, wire.conductorCopperAreaM2(), copperRatio, wireRatio, r, fill, output);
     }
 
     /** R_ph = rho(T) N_c C MLT / (A a^2), Ohm. */

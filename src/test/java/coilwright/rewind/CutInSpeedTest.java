@@ -21,6 +21,13 @@ class CutInSpeedTest {
     }
 
     @Test
+    void agrees_with_the_load_package_for_both_bridges() {
+        for (var type : coilwright.load.BridgeType.values()) {
+            assertEquals(coilwright.load.CutIn.speedRpm(0.07, 48, 0.45, type), CutInSpeed.speedRpm(0.07, 48, 0.45), 1e-12);
+        }
+    }
+
+    @Test
     void zero_ke_or_battery_and_negative_diode_drop_are_refused() {
         InvalidInputException e = assertThrows(InvalidInputException.class, () -> CutInSpeed.speedRpm(0, -12, -1));
         assertEquals(3, e.errors().size());
