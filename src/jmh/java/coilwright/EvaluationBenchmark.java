@@ -13,6 +13,8 @@ import coilwright.load.Chemistry;
 import coilwright.load.DiodeType;
 import coilwright.load.Rectifier;
 import coilwright.machine.AirCoredStator;
+import coilwright.machine.Alternator;
+import coilwright.machine.AlternatorModel;
 import coilwright.machine.AlternatorSpec;
 import coilwright.machine.Connection;
 import coilwright.magnet.AxialDualRotor;
@@ -56,8 +58,20 @@ public class EvaluationBenchmark {
                     new Cable(15, 6e-6, 30), new Cable(3, 16e-6, 25)),
             new SpeedRange(0, 600, 200), 400, 900);
 
+    final Alternator alternator = AlternatorModel.build(request.alternator());
+
     @Benchmark
     public AlternatorEvaluation evaluate_200_points() {
         return AlternatorEvaluator.evaluate(request);
+    }
+
+    /** The 200 operating points alone (no cut-in bisection, rated point or cautions): the solver's share. */
+    @Benchmark
+    public double solve_200_points_only() {
+        double sum = 0;
+        for (int i = 0; i < request.speedRange().points(); i++) {
+            sum += AlternatorEvaluator.point(alternator, request.load(), request.speedRange().speedRpm(i)).dcCurrentA();
+        }
+        return sum;
     }
 }

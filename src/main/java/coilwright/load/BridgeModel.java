@@ -20,6 +20,8 @@ final class BridgeModel {
     final double v0;
     final double rDc;
     final double emfPeakV;
+    /** Amplitude of every pair EMF e_k - e_j (line-to-line for three-phase, the winding EMF for single-phase), V. */
+    final double emfPeakPairV;
     /** Length of the symmetry interval: T/6 (three-phase) or T/2 (single-phase), s. */
     final double sweepS;
     /**
@@ -69,7 +71,8 @@ final class BridgeModel {
             emfPeakV = peak / 2;
         }
         r = rWinding + rCable;
-        windowHalfRad = windowHalfRad(c.peakDrivingEmfV(), v0);
+        emfPeakPairV = c.peakDrivingEmfV();
+        windowHalfRad = windowHalfRad(emfPeakPairV, v0);
         int pairs = windowHalfRad >= MIN_WINDOW_RAD ? m * (m - 1) : 0;
         pairK = new int[pairs];
         pairJ = new int[pairs];

@@ -36,15 +36,23 @@ final class BridgeResults {
             BridgeSegment s = sw.segments.get(i);
             double d = sw.durations.get(i);
             BasisIntegrals bi = new BasisIntegrals(s, d);
-            for (int k = 0; k < md.m; k++) {
-                if (s.sign[k] != 0) {
-                    sumI2 += bi.product(s.current[k], s.current[k]);
-                    emfPower += bi.product(s.emf(k), s.current[k]);
+            BridgePulse pulse = sw.pulses.get(i);
+            if (pulse != null) {
+                sumI2 += 2 * pulse.squareA2s;
+                emfPower += pulse.emfEnergyJ;
+                qIdc += pulse.chargeC;
+                qIdc2 += pulse.squareA2s;
+            } else {
+                for (int k = 0; k < md.m; k++) {
+                    if (s.sign[k] != 0) {
+                        sumI2 += bi.product(s.current[k], s.current[k]);
+                        emfPower += bi.product(s.emf(k), s.current[k]);
+                    }
                 }
+                double[] idc = s.dcCurrent();
+                qIdc += bi.integral(idc);
+                qIdc2 += bi.product(idc, idc);
             }
-            double[] idc = s.dcCurrent();
-            qIdc += bi.integral(idc);
-            qIdc2 += bi.product(idc, idc);
             for (int[] pair : pairs(md.m)) {
                 double[] v = minus(s.terminal(pair[0]), s.terminal(pair[1]));
                 vll2 += bi.product(v, v);
@@ -96,6 +104,12 @@ final class BridgeResults {
             if (s.off()) {
                 continue;
             }
+            BridgePulse pulse = sw.pulses.get(i);
+            if (pulse != null) {
+                // line currents +i and -i: the largest delta combination is (i - (-i)) / 3
+                best = Math.max(best, delta && md.m == 3 ? 2 * pulse.peakA / 3 : pulse.peakA);
+                continue;
+            }
             List<double[]> fns = new ArrayList<>();
             if (delta) {
                 for (int[] p : pairs(md.m)) {
@@ -125,7 +139,7 @@ final class BridgeResults {
             }
         }
         if (bestSeg == null) {
-            return 0;
+            return best;
         }
         double step = PEAK_SAMPLE_RAD / md.w;
         double lo = Math.max(0, bestTau - step);

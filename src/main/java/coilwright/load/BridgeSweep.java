@@ -39,6 +39,8 @@ final class BridgeSweep {
 
     final List<BridgeSegment> segments = new ArrayList<>(8);
     final List<Double> durations = new ArrayList<>(8);
+    /** The isolated pulse computed by series for each segment that is one, else null. */
+    final List<BridgePulse> pulses = new ArrayList<>(8);
     final double[] end;
     final double t0;
 
@@ -88,20 +90,34 @@ final class BridgeSweep {
             }
             boolean found = seg.off() ? offEvent(t, tEnd - t) : findEvent(seg, tEnd - t);
             if (!found) {
-                segments.add(seg);
-                durations.add(tEnd - t);
+                add(seg, tEnd - t, null);
                 x = new double[md.m];
                 seg.currentsAt(tEnd - t, x);
                 break;
             }
             double tau = evTau;
-            segments.add(seg);
-            durations.add(tau);
+            add(seg, tau, null);
             seg.currentsAt(tau, x);
             t += tau;
             seg = transition(seg, evType, evK, evJ, t, x);
+            if (evType == PAIR && seg.conducting() == 2) {
+                BridgePulse pulse = BridgePulse.of(md, evK, evJ, (tEnd - t) * md.w);
+                if (pulse != null) {
+                    double d = pulse.lengthRad / md.w;
+                    add(seg, d, pulse);
+                    t += d;
+                    java.util.Arrays.fill(x, 0);
+                    seg = settle(new int[md.m], t, x);
+                }
+            }
         }
         end = x;
+    }
+
+    private void add(BridgeSegment seg, double d, BridgePulse pulse) {
+        segments.add(seg);
+        durations.add(d);
+        pulses.add(pulse);
     }
 
     private BridgeSegment transition(BridgeSegment seg, int type, int k, int j, double t, double[] x) {

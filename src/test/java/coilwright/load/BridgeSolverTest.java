@@ -90,4 +90,62 @@ class BridgeSolverTest {
         assertEquals(0, p.powerFromEmfW(), 0.0);
         assertEquals(5 * Math.sqrt(3), p.lineToLineTerminalVoltageRmsV(), 1e-12);
     }
+
+    /**
+     * Regression: an axial 24 V design's cut-in bisection probed speeds where sqrt(2) E_LL exceeded Vb + 2 Vd by
+     * a few parts in 1e10; the pair's current, starting from a double root, ended on rounding noise and restarted
+     * at the same instant until "more than 200 switching events in one interval (w = 89.91 rad/s, V0 = 25.6 V)".
+     */
+    @Test
+    void more_than_200_switching_events_in_one_interval_no_longer_occurs_near_cut_in() {
+        double f = 89.91231084986968 / (2 * Math.PI);
+        double threshold = 24 + 2 * 0.8;
+        for (boolean three : new boolean[] {true, false}) {
+            double toPhase = Math.sqrt(2) * (three ? Math.sqrt(3) : 1);
+            for (double margin = 1e-14; margin < 0.1; margin *= 3) {
+                BridgeCircuit c = circuit(three, threshold * (1 + margin) / toPhase, f, 0.9, 0.004, 24, 0.8, 0.02, 0.05, 0.01);
+                BridgeOperatingPoint p = BridgeSolver.solve(c);
+                assertTrue(p.dcCurrentA() >= 0 && Double.isFinite(p.dcCurrentA()), () -> p.toString());
+                assertEquals(0, p.energyBalanceResidualW(), 1e-9 * p.powerFromEmfW(), () -> p.toString());
+            }
+        }
+    }
+
+    @Property(tries = 400)
+    void near_cut_in_the_solution_is_finite_conserves_energy_and_its_current_tends_to_zero(
+            @ForAll boolean three,
+            @ForAll boolean above,
+            @ForAll @DoubleRange(min = -14, max = -2) @Scale(8) double log10Margin,
+            @ForAll @DoubleRange(min = 5, max = 400) @Scale(8) double f,
+            @ForAll @DoubleRange(min = 0.001, max = 20) @Scale(8) double r,
+            @ForAll @DoubleRange(min = 1e-5, max = 0.2) @Scale(8) double l,
+            @ForAll @DoubleRange(min = 1, max = 400) @Scale(8) double vb,
+            @ForAll @DoubleRange(min = 0, max = 1.5) @Scale(8) double vd,
+            @ForAll @DoubleRange(min = 0, max = 2) @Scale(8) double rdc,
+            @ForAll @DoubleRange(min = 0, max = 1) @Scale(8) double rcab) {
+        double margin = Math.pow(10, log10Margin) * (above ? 1 : -1);
+        double threshold = vb + 2 * vd;
+        double toPhase = Math.sqrt(2) * (three ? Math.sqrt(3) : 1);
+        BridgeCircuit c = circuit(three, threshold * (1 + margin) / toPhase, f, r, l, vb, vd, rdc, rcab, 0);
+        BridgeOperatingPoint p = BridgeSolver.solve(c);
+        double[] values = {p.dcCurrentA(), p.dcCurrentRmsA(), p.lineCurrentRmsA(), p.lineCurrentPeakA(),
+                p.deltaPhaseCurrentPeakA(), p.powerFromEmfW(), p.powerToBatteryW(), p.windingCopperLossW(),
+                p.acCableLossW(), p.dcCableLossW(), p.diodeLossW(), p.conductionAngleDeg()};
+        for (double v : values) {
+            assertTrue(Double.isFinite(v) && v >= 0, () -> "non-finite or negative value in " + p);
+        }
+        assertEquals(0, p.energyBalanceResidualW(), 1e-9 * p.powerFromEmfW(), () -> p.toString());
+        assertTrue(p.dcCurrentRmsA() >= p.dcCurrentA() * (1 - 1e-12), "rms >= average: " + p);
+        assertTrue(p.lineCurrentPeakA() >= p.lineCurrentRmsA() * (1 - 1e-12), "peak >= rms: " + p);
+        if (!above) {
+            assertEquals(0, p.dcCurrentA(), 0.0, "no current below cut-in");
+        }
+        // the loop current never exceeds (peak EMF - V0) / loop resistance: it tends to zero with the margin
+        double loopOhm = three ? 2 * (r + rcab) + rdc : r + 2 * rcab + rdc;
+        double excessV = Math.max(c.peakDrivingEmfV() - threshold, 0);
+        assertTrue(p.lineCurrentPeakA() <= excessV / loopOhm * (1 + 1e-9) + 1e-300, "bounded by the margin: " + p);
+        // and it does not fall as the margin grows
+        BridgeCircuit wider = circuit(three, threshold * (1 + 2 * Math.abs(margin)) / toPhase, f, r, l, vb, vd, rdc, rcab, 0);
+        assertTrue(BridgeSolver.solve(wider).dcCurrentA() >= p.dcCurrentA(), "current rises with the margin");
+    }
 }
