@@ -9,6 +9,8 @@ import coilwright.web.Metrics;
 import coilwright.web.OpenApiHandler;
 import coilwright.web.Route;
 import coilwright.web.Units;
+import coilwright.service.Services;
+import coilwright.web.pages.DesignPages;
 import coilwright.web.pages.HomePage;
 import coilwright.web.pages.ThymeleafRenderer;
 import io.javalin.Javalin;
@@ -34,7 +36,7 @@ public final class App {
         this.config = config;
         AtomicBoolean ready = new AtomicBoolean(false);
         Metrics metrics = new Metrics();
-        List<Route> table = new ArrayList<>(routeTable(ready, metrics));
+        List<Route> table = new ArrayList<>(routeTable(ready, metrics, Services.create()));
         table.addAll(extraRoutes);
         this.routes = List.copyOf(table);
         this.javalin = Javalin.create(cfg -> {
@@ -58,12 +60,14 @@ public final class App {
     }
 
     /** Every route of the service. Handlers are thin and live in {@code coilwright.web}. */
-    private static List<Route> routeTable(AtomicBoolean ready, Metrics metrics) {
-        return List.of(
+    private static List<Route> routeTable(AtomicBoolean ready, Metrics metrics, Services services) {
+        List<Route> r = new ArrayList<>(List.of(
                 Route.get("/health", new HealthHandler(ready::get)),
                 Route.get("/metrics", metrics),
                 Route.get("/api/v1/openapi.json", new OpenApiHandler()),
-                Route.get("/", new HomePage()));
+                Route.get("/", new HomePage())));
+        r.addAll(DesignPages.routes(services));
+        return r;
     }
 
     /** A startable app; nothing listens until {@link #start}. */
