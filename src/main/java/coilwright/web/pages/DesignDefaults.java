@@ -48,7 +48,7 @@ final class DesignDefaults {
                     new RadialSurfaceRotor(RotorSide.INNER, "N42", 0.10, 0.05, 0.001, 0.005, 0.8, 0.0025),
                     new SlottedStator(0.015, 0.006, 0.001, 0.0002, 0.005), WireSpec.awg(18, 2), Cooling.ENCLOSED_NATURAL,
                     ThermalClass.F, 80, 50, 0, 0),
-            new ResistiveLoad(3.0, new Cable(10, 2.5e-6, 25)),
+            new ResistiveLoad(6.0, new Cable(10, 2.5e-6, 25)),
             new SpeedRange(0, 1000, 101), 750, 1500);
 
     private DesignDefaults() {
