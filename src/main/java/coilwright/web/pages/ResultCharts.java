@@ -38,7 +38,19 @@ final class ResultCharts {
         }
         ChartSpec losses = ChartSpec.of("Losses and efficiency", SPEED, new Axis("Loss", "W"), lossSeries)
                 .withRightAxis(new Axis("Efficiency", "%"), List.of(series("Efficiency", pts, p -> 100 * p.efficiency())));
-        return List.of(SvgCharts.lineChart(voltages), SvgCharts.lineChart(current), SvgCharts.lineChart(losses));
+        return List.of(scalable(voltages), scalable(current), scalable(losses));
+    }
+
+    /**
+     * The chart with a viewBox, so it scales to its box on screen and paper instead of being clipped at its drawn
+     * size (the charting helper writes width and height only).
+     */
+    static String scalable(ChartSpec spec) {
+        String svg = SvgCharts.lineChart(spec);
+        if (svg.contains("viewBox")) {
+            return svg;
+        }
+        return svg.replaceFirst("<svg ", "<svg viewBox=\"0 0 " + spec.widthPx() + " " + spec.heightPx() + "\" ");
     }
 
     private static Series series(String name, List<SpeedPoint> pts, ToDoubleFunction<SpeedPoint> y) {

@@ -21,7 +21,7 @@ final class ResultsModel {
     static Map<String, Object> of(String title, String editLink, EvaluationRequest request, AlternatorEvaluation e,
                                   Units units) {
         Map<String, Object> m = new HashMap<>();
-        m.put("title", title);
+        m.put("heading", title);
         m.put("editLink", editLink);
         m.put("summary", Summary.of(e, request, units));
         m.put("dangers", e.cautions().stream().filter(c -> c.severity() == Caution.Severity.DANGER).toList());

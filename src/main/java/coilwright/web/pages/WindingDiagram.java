@@ -28,7 +28,7 @@ final class WindingDiagram {
         double width = Math.min(26, 0.62 * 2 * Math.PI * R / q);
         StringBuilder s = new StringBuilder();
         s.append(f("<svg xmlns=\"http://www.w3.org/2000/svg\" class=\"winding-diagram\" viewBox=\"0 0 %.0f %.0f\" role=\"img\" "
-                + "aria-label=\"Winding layout: %d slots, %d poles, %d phase(s)\">", SIZE, SIZE + 70, q, w.spec().poles(), w.spec().phases()));
+                + "aria-label=\"Winding layout: %d slots, %d poles, %d phase(s)\">", SIZE, SIZE + 100, q, w.spec().poles(), w.spec().phases()));
         s.append(f("<circle cx=\"%.0f\" cy=\"%.0f\" r=\"%.1f\" fill=\"#eef1f3\" stroke=\"#8a949c\" stroke-width=\"%.1f\"/>",
                 C, C, R, 2 * HALF_DEPTH + 8));
         for (Coil coil : w.coils()) {
@@ -49,7 +49,7 @@ final class WindingDiagram {
                 + "%d slots · %d poles</text>", C, C - 6, q, w.spec().poles()));
         s.append(f("<text x=\"%.0f\" y=\"%.0f\" text-anchor=\"middle\" font-size=\"13\" fill=\"#4a555e\">q = %s · pitch %d</text>",
                 C, C + 14, fraction(w), w.coilPitchSlots()));
-        s.append(legend(w.spec().phases()));
+        s.append(legend(w.spec().phases(), w.spec().layers().sidesPerSlot() == 2));
         return s.append("</svg>").toString();
     }
 
@@ -76,19 +76,20 @@ final class WindingDiagram {
         double outer = R + HALF_DEPTH;
         double inner = twoLayers ? (go ? R : R - HALF_DEPTH) : R - HALF_DEPTH;
         double top = twoLayers && !go ? R : outer;
-        double height = (twoLayers ? top - inner : outer - inner) - 1;
+        double height = top - inner - 1;
         String label = (in ? "+" : "−") + coil.phaseName();
         double font = Math.min(12, width * 0.5);
-        return f("<g transform=\"rotate(%.3f %.0f %.0f)\" class=\"side\" data-slot=\"%d\">", (slot - 1) * pitchDeg, C, C, slot)
-                + f("<rect x=\"%.1f\" y=\"%.1f\" width=\"%.1f\" height=\"%.1f\" rx=\"2\" fill=\"%s\" stroke=\"%s\" stroke-width=\"1.5\"/>",
-                C - width / 2, C - (twoLayers ? top : outer), width, height, in ? colour : "#ffffff", colour)
-                + (font < 6 ? "" : f("<text x=\"%.0f\" y=\"%.1f\" text-anchor=\"middle\" dominant-baseline=\"middle\" "
-                + "font-size=\"%.1f\" fill=\"%s\">%s</text>", C, C - (twoLayers ? top : outer) + height / 2, font,
-                in ? "#ffffff" : colour, label))
+        double angle = (slot - 1) * pitchDeg;
+        double[] mid = polar(top - height / 2 - 0.5, angle);
+        return f("<g class=\"side\" data-slot=\"%d\"><rect transform=\"rotate(%.3f %.0f %.0f)\" x=\"%.1f\" y=\"%.1f\" "
+                        + "width=\"%.1f\" height=\"%.1f\" rx=\"2\" fill=\"%s\" stroke=\"%s\" stroke-width=\"1.5\"/>",
+                slot, angle, C, C, C - width / 2, C - top, width, height, in ? colour : "#ffffff", colour)
+                + (font < 6 ? "" : f("<text x=\"%.1f\" y=\"%.1f\" text-anchor=\"middle\" dominant-baseline=\"central\" "
+                + "font-size=\"%.1f\" font-weight=\"700\" fill=\"%s\">%s</text>", mid[0], mid[1], font, in ? "#ffffff" : colour, label))
                 + "</g>";
     }
 
-    private static String legend(int phases) {
+    private static String legend(int phases, boolean twoLayers) {
         StringBuilder s = new StringBuilder();
         double y = SIZE + 10;
         for (int ph = 0; ph < phases; ph++) {
@@ -98,10 +99,12 @@ final class WindingDiagram {
             s.append(f("<text x=\"%.0f\" y=\"%.0f\" font-size=\"14\" fill=\"#1c2329\">Phase %s</text>", x + 24, y + 14,
                     Winding.phaseName(ph)));
         }
-        s.append(f("<text x=\"20\" y=\"%.0f\" font-size=\"13\" fill=\"#1c2329\">Filled +A: side carries the phase current in; "
-                + "hollow −A: out. Curves join a coil's go and return slots,</text>", y + 40));
-        s.append(f("<text x=\"20\" y=\"%.0f\" font-size=\"13\" fill=\"#1c2329\">numbered; dashed = coil connected reversed."
-                + "%s</text>", y + 57, ""));
+        String[] lines = {"Filled +A: the side carries its phase current in; hollow −A: out.",
+                twoLayers ? "Two sides per slot: the go side outside, the return side inside." : "One coil side per slot.",
+                "Numbered curves join each coil's sides; dashed = coil connected reversed."};
+        for (int i = 0; i < lines.length; i++) {
+            s.append(f("<text x=\"20\" y=\"%.0f\" font-size=\"14\" fill=\"#1c2329\">%s</text>", y + 40 + 18 * i, lines[i]));
+        }
         return s.toString();
     }
 
