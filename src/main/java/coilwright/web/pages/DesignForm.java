@@ -39,7 +39,7 @@ final class DesignForm {
         Map<String, String> typed = new LinkedHashMap<>();
         posted.forEach((k, v) -> typed.put(k, v.isEmpty() ? "" : v.get(0).trim()));
         Optional<Topology> topology = Topology.parse(typed.get(Topology.FIELD));
-        Class<?> load = LOADS.get(typed.get(LOAD_TYPE));
+        Class<?> load = LOADS.get(typed.getOrDefault(LOAD_TYPE, ""));
         if (topology.isEmpty() || load == null) {
             return failed(typed, FieldErrors.of(choiceErrors(typed, topology.isEmpty(), load == null)));
         }

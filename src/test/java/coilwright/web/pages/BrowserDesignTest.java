@@ -69,6 +69,7 @@ class BrowserDesignTest {
             d.findElement(By.cssSelector("button[type=submit]")).click();
             d.manage().window().setSize(new Dimension(1300, 6000));
             screenshot(d, "results-battery");
+            elementShot(d, "main", "results-battery-main");
             String cutIn = d.findElement(By.cssSelector("#cut-in .value")).getText();
             assertTrue(cutIn.matches("\\d+ rpm"), cutIn);
             assertTrue(d.findElements(By.cssSelector(".caution .caution-title")).stream()
