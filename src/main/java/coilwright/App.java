@@ -13,6 +13,8 @@ import coilwright.web.Metrics;
 import coilwright.web.OpenApiHandler;
 import coilwright.web.Route;
 import coilwright.web.Units;
+import coilwright.service.Services;
+import coilwright.web.pages.DesignPages;
 import coilwright.web.pages.HomePage;
 import coilwright.web.pages.ThymeleafRenderer;
 import coilwright.web.saved.SavedDesigns;
@@ -83,6 +85,7 @@ public final class App {
                 Route.get("/api/v1/openapi.json", new OpenApiHandler()),
                 Route.get("/", new HomePage())));
         r.addAll(SavedDesigns.routes(services));
+        r.addAll(DesignPages.routes(services));
         return r;
     }
 

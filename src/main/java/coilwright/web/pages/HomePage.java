@@ -4,10 +4,10 @@ import io.javalin.http.Context;
 import io.javalin.http.Handler;
 import java.util.Map;
 
-/** {@code GET /}: the home page (a placeholder until the demo designs and start link land). */
+/** {@code GET /}: what the tool is for, the example designs one click away and a start-a-design link. */
 public final class HomePage implements Handler {
     @Override
     public void handle(Context ctx) {
-        ctx.render("home", Map.of("title", "Coilwright"));
+        ctx.render("home", Map.of("title", "Coilwright", "examples", Examples.all()));
     }
 }
