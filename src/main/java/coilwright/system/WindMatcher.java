@@ -69,11 +69,13 @@ public final class WindMatcher {
         boolean overSpeed = rotor.isOverSpeed(unlimitedRotorRpm);
         double rotorRpm = overSpeed ? rotor.maxRotorSpeedRpm() : unlimitedRotorRpm;
         SpeedPoint alt = alternator.at(rotor.alternatorSpeedRpm(rotorRpm));
-        double rotorPowerW = overSpeed ? alt.shaftPowerW() / efficiency : rotor.powerW(v, rotorRpm, airDensityKgM3);
+        boolean freeSpinning = alt.shaftTorqueNm() == 0.0;
+        // free-spinning: Cp is zero at the runaway tip-speed ratio; the rotor delivers nothing (avoids rounding dust)
+        double rotorPowerW = overSpeed || freeSpinning ? alt.shaftPowerW() / efficiency
+                : rotor.powerW(v, rotorRpm, airDensityKgM3);
         double tsr = rotor.tipSpeedRatio(v, rotorRpm);
 
         List<MatchFlag> flags = new ArrayList<>();
-        boolean freeSpinning = alt.shaftTorqueNm() == 0.0;
         if (freeSpinning) {
             flags.add(MatchFlag.FREE_SPINNING);
         } else if (!overSpeed && tsr < STALL_TSR_SHARE * rotor.curve().optimumTipSpeedRatio()) {
