@@ -15,6 +15,7 @@ import coilwright.web.Route;
 import coilwright.web.Units;
 import coilwright.service.Services;
 import coilwright.web.pages.DesignPages;
+import coilwright.web.match.MatchRoutes;
 import coilwright.web.pages.HomePage;
 import coilwright.web.pages.ThymeleafRenderer;
 import coilwright.web.saved.SavedDesigns;
@@ -86,6 +87,7 @@ public final class App {
                 Route.get("/", new HomePage())));
         r.addAll(SavedDesigns.routes(services));
         r.addAll(DesignPages.routes(services));
+        r.addAll(MatchRoutes.routes(services));
         return r;
     }
 

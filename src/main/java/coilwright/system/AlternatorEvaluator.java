@@ -66,7 +66,8 @@ public final class AlternatorEvaluator {
         }
         double maxOutput = points.stream().mapToDouble(SpeedPoint::powerToLoadW).max().orElse(0);
         double maxDc = points.stream().mapToDouble(SpeedPoint::dcCurrentA).max().orElse(0);
-        SafetyInputs safety = safetyInputs(alt, load, vocMax, maxSpeed, req.maxSpeedRpm() > 0,
+        SafetyInputs safety = safetyInputs(alt, load, vocMax, maxSpeed, req.maxSpeedRpm() > 0
+                        ? "the maximum speed given" : "twice the rated speed, as no maximum was given",
                 Math.max(maxOutput, rated.powerToLoadW()), Math.max(maxDc, rated.dcCurrentA()));
         return new AlternatorEvaluation(alt, cutIn, cutInSolved, points, rated, density, vocMax, maxSpeed,
                 Cautions.assess(safety), warnings);
@@ -125,12 +126,28 @@ public final class AlternatorEvaluator {
         return hi;
     }
 
-    private static SafetyInputs safetyInputs(Alternator alt, Load load, double vocMax, double maxSpeed, boolean given,
+    /**
+     * The safety cautions of an alternator and load with the open-circuit voltage checked at a given speed, such as
+     * a turbine's runaway or free-spinning speed.
+     *
+     * @param checkSpeedRpm     alternator speed for the open-circuit voltage check, rpm, >= 0
+     * @param checkSpeedSource  where that speed comes from, in words
+     * @param maxOutputW        largest output power, W, >= 0 (diversion-load sizing)
+     * @param maxDcA            largest DC current, A, >= 0 (fusing)
+     * @return the cautions, most serious first
+     */
+    public static List<coilwright.safety.Caution> cautionsAt(Alternator alt, Load load, double checkSpeedRpm,
+                                                             String checkSpeedSource, double maxOutputW, double maxDcA) {
+        return Cautions.assess(safetyInputs(alt, load, alt.emfLineRmsV(checkSpeedRpm), checkSpeedRpm,
+                checkSpeedSource, maxOutputW, maxDcA));
+    }
+
+    private static SafetyInputs safetyInputs(Alternator alt, Load load, double vocMax, double maxSpeed, String source,
                                              double maxOutputW, double maxDcA) {
         boolean battery = load instanceof BatteryLoad;
         BatteryLoad b = battery ? (BatteryLoad) load : null;
         MagnetGrade grade = alt.spec().rotor().grade();
-        return new SafetyInputs(vocMax, maxSpeed, given ? "the maximum speed given" : "twice the rated speed, as no maximum was given",
+        return new SafetyInputs(vocMax, maxSpeed, source,
                 battery, battery ? b.battery().voltageV() : 0,
                 battery && b.battery().chemistry() == Chemistry.LEAD_ACID, maxOutputW, maxDcA, alt.magnetMassKg(),
                 grade.material() == MagnetMaterial.NDFEB_SINTERED, alt.spec().connection() == coilwright.machine.Connection.DELTA,

@@ -1,0 +1,61 @@
+package coilwright.system;
+
+import coilwright.load.Load;
+import coilwright.machine.Alternator;
+import coilwright.validation.Checks;
+
+import java.util.HashMap;
+import java.util.Map;
+
+/**
+ * An alternator with its load seen as a torque-speed curve at its shaft, for matching to a turbine. Each
+ * operating point is solved by {@link AlternatorEvaluator#point} and kept, so a speed asked twice is solved
+ * once. Not thread-safe: one instance per matching run.
+ */
+public final class AlternatorCurve {
+    private final Alternator alternator;
+    private final Load load;
+    private final Map<Double, SpeedPoint> solved = new HashMap<>();
+
+    /**
+     * @param alternator the built machine
+     * @param load       its battery or resistive load
+     */
+    public AlternatorCurve(Alternator alternator, Load load) {
+        new Checks().present("alternator", alternator).present("load", load).throwIfAny();
+        this.alternator = alternator;
+        this.load = load;
+    }
+
+    /**
+     * The operating point at an alternator shaft speed.
+     *
+     * @param speedRpm alternator speed, rpm, >= 0
+     */
+    public SpeedPoint at(double speedRpm) {
+        new Checks().nonNegative("speedRpm", speedRpm).throwIfAny();
+        return solved.computeIfAbsent(speedRpm, n -> AlternatorEvaluator.point(alternator, load, n));
+    }
+
+    /**
+     * Torque the alternator needs at its shaft, N m (0 below cut-in, where no current flows).
+     *
+     * @param speedRpm alternator speed, rpm, >= 0
+     */
+    public double torqueNm(double speedRpm) {
+        return at(speedRpm).shaftTorqueNm();
+    }
+
+    /** Open-circuit line EMF at a speed, V rms. */
+    public double openCircuitLineRmsV(double speedRpm) {
+        return alternator.emfLineRmsV(speedRpm);
+    }
+
+    public Alternator alternator() {
+        return alternator;
+    }
+
+    public Load load() {
+        return load;
+    }
+}
