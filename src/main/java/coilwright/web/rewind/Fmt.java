@@ -44,15 +44,15 @@ public final class Fmt {
         return String.format(Locale.ROOT, "%.0f %%", 100 * fraction);
     }
 
-    /** "value (low to high, ±u %)". */
-    public String band(Band b, int digits) {
+    /** "value (low to high, ±u %)" (not named band: that is an OGNL operator). */
+    public String ranged(Band b, int digits) {
         return sig(b.value(), digits) + " (" + sig(b.low(), digits) + " to " + sig(b.high(), digits) + ", ±"
                 + String.format(Locale.ROOT, "%.1f", 100 * b.relativeUncertainty()) + " %)";
     }
 
     /** An optional band, or a dash. */
-    public String band(Optional<Band> b, int digits) {
-        return b.map(x -> band(x, digits)).orElse(NONE);
+    public String ranged(Optional<Band> b, int digits) {
+        return b.map(x -> ranged(x, digits)).orElse(NONE);
     }
 
     /** A temperature in the request's units with its symbol. */
