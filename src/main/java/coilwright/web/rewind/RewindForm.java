@@ -53,7 +53,7 @@ final class RewindForm {
         v.put("machine.measurements.measuredFrequencyHz", "40");
         v.put("machine.measurements.lineResistanceOhm", "1.45");
         v.put("machine.measurements.measuredTemperatureC", temperature(units, 20));
-        v.put("machine.measurements.lineInductanceH", "");
+        v.put("machine.measurements.lineInductanceH", "0.004");
         v.put("machine.measurements.voltageAccuracyPercent", "1");
         v.put("machine.measurements.speedAccuracyPercent", "1");
         v.put("machine.measurements.frequencyAccuracyPercent", "0.5");

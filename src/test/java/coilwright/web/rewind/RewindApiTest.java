@@ -107,6 +107,34 @@ class RewindApiTest {
     }
 
     @Test
+    void with_resistance_and_inductance_measured_each_option_predicts_current_and_a_consistent_copper_loss() {
+        ObjectNode body = Bodies.request();
+        Bodies.measurements(body).put("lineInductanceH", 0.004);
+        Response r = post(PLAN, body);
+        r.then().statusCode(200);
+        RewindContract.assertMatches(r, PLAN);
+        JsonPath j = r.jsonPath();
+        String now = "reconnections.find { it.unchanged }";
+        double current = j.getDouble(now + ".output.phaseCurrentRmsA");
+        double resistance = j.getDouble(now + ".phaseResistanceOhm");
+        assertTrue(j.getDouble(now + ".output.dcCurrentA") > 0, "the machine as it is cuts in below 400 rpm");
+        assertEquals(3 * current * current * resistance, j.getDouble(now + ".output.copperLossW"),
+                1e-9 * j.getDouble(now + ".output.copperLossW"));
+        // R at the 60 C target from the 20 C reading: IEC 60028, alpha20 = 0.00393 /K
+        assertEquals(1.45 / 2 * (1 + 0.00393 * 40), resistance, 1e-9);
+    }
+
+    @Test
+    void a_working_speed_just_above_the_wanted_cut_in_still_gets_an_answer() {
+        // regression: the bridge solver used to give up on the many switching events just above cut-in
+        for (double cutIn : new double[] {395, 399, 399.9, 400, 401}) {
+            ObjectNode body = Bodies.request(Bodies.machine(), RewindTarget.battery(24, cutIn, 400));
+            Bodies.measurements(body).put("lineInductanceH", 0.004);
+            post(PLAN, body).then().statusCode(200);
+        }
+    }
+
+    @Test
     void a_coil_window_adds_a_fill_check_to_every_wire_choice() {
         ObjectNode body = Bodies.request();
         ((ObjectNode) body.get("machine")).putObject("coilWindow").put("areaM2", 0.016 * 0.013).put("kind", "AIR_CORED");

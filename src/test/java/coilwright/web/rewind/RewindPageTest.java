@@ -51,6 +51,7 @@ class RewindPageTest {
                 .body(containsString("turns per coil"))
                 .body(containsString("strands in hand"))
                 .body(containsString("Other pole counts for this stator"))
+                .body(containsString("phase inductance 2.000e-03 H from 4.000e-03 H between line terminals"))
                 .extract().asString();
         Matcher link = Pattern.compile("href=\"(/design/new\\?[^\"]+)\"").matcher(html);
         assertTrue(link.find(), "an evaluation link");
