@@ -13,11 +13,11 @@ import coilwright.web.Metrics;
 import coilwright.web.OpenApiHandler;
 import coilwright.web.Route;
 import coilwright.web.Units;
-import coilwright.service.Services;
 import coilwright.web.pages.DesignPages;
 import coilwright.web.match.MatchRoutes;
 import coilwright.web.pages.HomePage;
 import coilwright.web.pages.ThymeleafRenderer;
+import coilwright.web.rewind.RewindRoutes;
 import coilwright.web.saved.SavedDesigns;
 import io.javalin.Javalin;
 import io.javalin.http.staticfiles.Location;
@@ -88,6 +88,7 @@ public final class App {
         r.addAll(SavedDesigns.routes(services));
         r.addAll(DesignPages.routes(services));
         r.addAll(MatchRoutes.routes(services));
+        r.addAll(RewindRoutes.routes(services));
         return r;
     }
 

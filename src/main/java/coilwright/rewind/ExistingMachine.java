@@ -27,15 +27,18 @@ import java.util.Optional;
  * @param parallelPaths  parallel paths per phase, 1..slots (must be one the layout allows)
  * @param turnsPerCoil   turns of each coil, 1..10000
  * @param wire           the wire now on the coils, with its strands in hand
- * @param coilWindow     the window of one coil side, or null when unknown (fill is then reported relative to now)
+ * @param coilWindow     the window of one coil side, empty when unknown (fill is then reported relative to now);
+ *                       null is taken as empty
  * @param measurements   the readings, or null when nothing was measured (a plan then cannot be made)
  */
 public record ExistingMachine(int slots, int poles, int phases, Layers layers, int coilPitchSlots,
                               Connection connection, int coilsPerPhase, int parallelPaths, int turnsPerCoil,
-                              WireSpec wire, CoilWindow coilWindow, Measurements measurements) {
+                              WireSpec wire, Optional<CoilWindow> coilWindow,
+                              Measurements measurements) {
     public static final int MAX_TURNS_PER_COIL = 10_000;
 
     public ExistingMachine {
+        coilWindow = coilWindow == null ? Optional.empty() : coilWindow;
         Checks c = new Checks();
         c.intRange("slots", slots, 2, WindingSpec.MAX_SLOTS);
         c.require(poles == 0 || (poles >= 2 && poles <= WindingSpec.MAX_POLES && poles % 2 == 0), "poles", poles,
@@ -105,6 +108,6 @@ public record ExistingMachine(int slots, int poles, int phases, Layers layers, i
 
     /** The coil window, if known. */
     public Optional<CoilWindow> coilWindowIfKnown() {
-        return Optional.ofNullable(coilWindow);
+        return coilWindow;
     }
 }

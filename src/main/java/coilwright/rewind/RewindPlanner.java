@@ -62,7 +62,7 @@ public final class RewindPlanner {
                 target.kind() == RewindTarget.Kind.BATTERY_CUT_IN
                         ? "cut-in: sqrt(2) x Ke_LL x n = battery + 2 diode drops (closed form; before load resistance)"
                         : "voltage: open-circuit line voltage = Ke_LL x n",
-                machine.coilWindow() == null
+                machine.coilWindow().isEmpty()
                         ? "coil window unknown: fill is given relative to the present coil (wireAreaRatio; 1 = as now)"
                         : "fill checked against the stated coil window",
                 outputNote(ch, target));

@@ -10,13 +10,15 @@ import com.fasterxml.jackson.databind.ObjectMapper;
  * @param evaluation evaluate designs, lay out windings, catalogues
  * @param designs    saved designs: save, revise, read, recompute
  * @param matching   match a wind rotor or a hydro runner to an alternator
+ * @param rewind     reconnect or rewind a measured machine; pole options of a bare stator
  */
-public record Services(EvaluationService evaluation, DesignLibrary designs, MatchingService matching) {
+public record Services(EvaluationService evaluation, DesignLibrary designs, MatchingService matching,
+                       RewindService rewind) {
 
     /** The services with their default wiring over an open database and the service's JSON mapper. */
     public static Services create(Database database, ObjectMapper mapper) {
         EvaluationService evaluation = new EvaluationService();
         return new Services(evaluation, new DesignLibrary(evaluation, new DesignStore(database), mapper,
-                DesignLibrary.currentToolVersion()), new MatchingService());
+                DesignLibrary.currentToolVersion()), new MatchingService(), new RewindService());
     }
 }

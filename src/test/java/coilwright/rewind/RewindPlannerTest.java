@@ -11,6 +11,7 @@ import coilwright.winding.Layers;
 import org.junit.jupiter.api.Test;
 
 import java.util.List;
+import java.util.Optional;
 
 import static org.junit.jupiter.api.Assertions.*;
 
@@ -140,7 +141,7 @@ class RewindPlannerTest {
         ExistingMachine base = MeasuredMachines.existing(MeasuredMachines.axial(36), 16);
         CoilWindow window = CoilWindow.airCored(0.016, 0.013);
         ExistingMachine m = new ExistingMachine(base.slots(), base.poles(), base.phases(), base.layers(),
-                base.coilPitchSlots(), base.connection(), 0, 1, 36, base.wire(), window, base.measurements());
+                base.coilPitchSlots(), base.connection(), 0, 1, 36, base.wire(), Optional.of(window), base.measurements());
         RewindPlan plan = RewindPlanner.plan(m, RewindTarget.battery(24, 120, 400));
         for (RewindOption o : plan.rewinds()) {
             for (WireChoice w : o.wireChoices()) {

@@ -1,0 +1,26 @@
+package coilwright.web.rewind;
+
+import coilwright.rewind.PoleOption;
+import coilwright.winding.Layers;
+import java.util.List;
+
+/**
+ * The pole counts a bare stator can be wound for.
+ *
+ * @param slots    slots or coil positions
+ * @param phases   1 or 3
+ * @param layers   SINGLE or DOUBLE
+ * @param minPoles lowest pole count considered
+ * @param maxPoles highest pole count considered
+ * @param options  balanced pole counts, highest fundamental winding factor first (empty when none balances)
+ */
+public record StatorOptionsResult(int slots, int phases, Layers layers, int minPoles, int maxPoles,
+                                  List<PoleOption> options) {
+    public StatorOptionsResult {
+        options = List.copyOf(options);
+    }
+
+    static StatorOptionsResult of(StatorOptionsRequest r, List<PoleOption> options) {
+        return new StatorOptionsResult(r.slots(), r.phases(), r.layers(), r.minPoles(), r.maxPoles(), options);
+    }
+}
