@@ -53,7 +53,7 @@ class DesignPagesTest {
     void an_example_pre_fills_the_form_with_its_own_values() {
         given().queryParam("example", "radial-hydro-48v").get("/design/new").then().statusCode(200)
                 .body(containsString("name=\"alternator.winding.slots\" value=\"24\""))
-                .body(containsString("name=\"alternator.rotor.gapDiameterM\" value=\"120\""))
+                .body(containsString("name=\"alternator.rotor.gapDiameterM\" value=\"140\""))
                 .body(containsString("<option value=\"RADIAL_INNER\" selected=\"selected\""));
     }
 
