@@ -1,5 +1,6 @@
 package coilwright;
 
+import coilwright.service.Services;
 import coilwright.web.AppConfig;
 import coilwright.web.ErrorMapping;
 import coilwright.web.HealthHandler;
@@ -9,6 +10,7 @@ import coilwright.web.Metrics;
 import coilwright.web.OpenApiHandler;
 import coilwright.web.Route;
 import coilwright.web.Units;
+import coilwright.web.api.ApiV1;
 import coilwright.web.pages.HomePage;
 import coilwright.web.pages.ThymeleafRenderer;
 import io.javalin.Javalin;
@@ -34,7 +36,8 @@ public final class App {
         this.config = config;
         AtomicBoolean ready = new AtomicBoolean(false);
         Metrics metrics = new Metrics();
-        List<Route> table = new ArrayList<>(routeTable(ready, metrics));
+        Services services = Services.create();
+        List<Route> table = new ArrayList<>(routeTable(ready, metrics, services));
         table.addAll(extraRoutes);
         this.routes = List.copyOf(table);
         this.javalin = Javalin.create(cfg -> {
@@ -58,12 +61,14 @@ public final class App {
     }
 
     /** Every route of the service. Handlers are thin and live in {@code coilwright.web}. */
-    private static List<Route> routeTable(AtomicBoolean ready, Metrics metrics) {
-        return List.of(
+    private static List<Route> routeTable(AtomicBoolean ready, Metrics metrics, Services services) {
+        List<Route> r = new ArrayList<>(List.of(
                 Route.get("/health", new HealthHandler(ready::get)),
                 Route.get("/metrics", metrics),
                 Route.get("/api/v1/openapi.json", new OpenApiHandler()),
-                Route.get("/", new HomePage()));
+                Route.get("/", new HomePage())));
+        r.addAll(ApiV1.routes(services));
+        return r;
     }
 
     /** A startable app; nothing listens until {@link #start}. */

@@ -1,0 +1,100 @@
+package coilwright.web.api;
+
+import coilwright.service.DesignDocument;
+import coilwright.web.NotFoundException;
+import coilwright.web.RecordBinder;
+import java.io.IOException;
+import java.io.UncheckedIOException;
+import java.net.URI;
+import java.net.URISyntaxException;
+import java.net.URL;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.FileSystem;
+import java.nio.file.FileSystems;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.Collections;
+import java.util.List;
+import java.util.Map;
+import java.util.TreeMap;
+import java.util.stream.Stream;
+
+/**
+ * The invented example designs, {@code examples/<slug>.json} on the classpath (a directory in development, a jar
+ * folder when packaged), read and validated once at start-up. A broken example stops the start-up: it is a build
+ * fault, not a user's.
+ */
+public final class ExampleLibrary {
+    static final String FOLDER = "examples";
+    private final Map<String, DesignDocument> bySlug;
+
+    ExampleLibrary(Map<String, DesignDocument> bySlug) {
+        this.bySlug = Collections.unmodifiableMap(new TreeMap<>(bySlug));
+    }
+
+    /** Reads every {@code examples/*.json} on the classpath with the API's binder (same validation as a request). */
+    public static ExampleLibrary fromClasspath(RecordBinder binder) {
+        URL url = ExampleLibrary.class.getClassLoader().getResource(FOLDER);
+        if (url == null) {
+            throw new IllegalStateException("no " + FOLDER + " folder on the classpath");
+        }
+        try {
+            URI uri = url.toURI();
+            if (!"jar".equals(uri.getScheme())) {
+                return read(Path.of(uri), binder);
+            }
+            try (FileSystem jar = FileSystems.newFileSystem(uri, Map.of())) {
+                return read(jar.getPath("/" + FOLDER), binder);
+            }
+        } catch (IOException e) {
+            throw new UncheckedIOException(e);
+        } catch (URISyntaxException e) {
+            throw new IllegalStateException("bad classpath URL " + url, e);
+        }
+    }
+
+    private static ExampleLibrary read(Path folder, RecordBinder binder) throws IOException {
+        Map<String, DesignDocument> docs = new TreeMap<>();
+        try (Stream<Path> files = Files.list(folder)) {
+            for (Path file : files.filter(f -> f.getFileName().toString().endsWith(".json")).toList()) {
+                String name = file.getFileName().toString();
+                String json = Files.readString(file, StandardCharsets.UTF_8);
+                docs.put(name.substring(0, name.length() - ".json".length()), bind(binder, name, json));
+            }
+        }
+        return new ExampleLibrary(docs);
+    }
+
+    private static DesignDocument bind(RecordBinder binder, String name, String json) {
+        try {
+            return binder.bind(json, DesignDocument.class);
+        } catch (RuntimeException e) {
+            throw new IllegalStateException("example " + name + " is not a valid design: " + e.getMessage(), e);
+        }
+    }
+
+    /** The example slugs, sorted. */
+    public List<String> slugs() {
+        return List.copyOf(bySlug.keySet());
+    }
+
+    /**
+     * @throws NotFoundException when no example has that slug
+     */
+    public DesignDocument get(String slug) {
+        DesignDocument doc = bySlug.get(slug);
+        if (doc == null) {
+            throw new NotFoundException("There is no example named '" + slug + "'. The examples are: "
+                    + String.join(", ", bySlug.keySet()) + ".");
+        }
+        return doc;
+    }
+
+    /** One summary per example, sorted by slug. */
+    public List<ExampleSummary> summaries() {
+        return bySlug.entrySet().stream()
+                .map(e -> new ExampleSummary(e.getKey(), e.getValue().title(), e.getValue().notes(),
+                        ApiV1.PREFIX + "/examples/" + e.getKey()))
+                .toList();
+    }
+}
