@@ -34,7 +34,12 @@ public final class ExampleLibrary {
 
     /** Reads every {@code examples/*.json} on the classpath with the API's binder (same validation as a request). */
     public static ExampleLibrary fromClasspath(RecordBinder binder) {
-        URL url = ExampleLibrary.class.getClassLoader().getResource(FOLDER);
+        return fromClassLoader(ExampleLibrary.class.getClassLoader(), binder);
+    }
+
+    /** As {@link #fromClasspath} from a given class loader's {@code examples/} folder (a directory or in a jar). */
+    static ExampleLibrary fromClassLoader(ClassLoader loader, RecordBinder binder) {
+        URL url = loader.getResource(FOLDER);
         if (url == null) {
             throw new IllegalStateException("no " + FOLDER + " folder on the classpath");
         }
