@@ -2,7 +2,6 @@ package coilwright.web.api;
 
 import coilwright.service.EvaluationService;
 import coilwright.service.Services;
-import coilwright.system.EvaluationRequest;
 import coilwright.web.Json;
 import coilwright.web.RecordBinder;
 import coilwright.web.Route;
@@ -27,7 +26,7 @@ public final class ApiV1 {
         ExampleLibrary examples = ExampleLibrary.fromClasspath(binder);
         return List.of(
                 Route.post(PREFIX + "/evaluate",
-                        ctx -> ctx.json(evaluation.evaluate(binder.bind(ctx.body(), EvaluationRequest.class)))),
+                        new EvaluateHandler(evaluation, binder, EvaluateHandler.CACHE_BUDGET_BYTES)),
                 Route.post(PREFIX + "/winding",
                         ctx -> ctx.json(evaluation.layout(binder.bind(ctx.body(), WindingSpec.class)))),
                 Route.get(PREFIX + "/catalogue", ctx -> ctx.json(evaluation.catalogue())),

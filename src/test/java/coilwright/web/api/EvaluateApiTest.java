@@ -131,6 +131,17 @@ class EvaluateApiTest {
         assertEquals(a, b);
     }
 
+    @Test
+    void a_repeated_body_gets_identical_bytes_and_a_repeated_error_stays_an_error() {
+        String body = resistiveAxial().json();
+        byte[] a = post(PATH, body).then().statusCode(200).extract().asByteArray();
+        byte[] b = post(PATH, body).then().statusCode(200).extract().asByteArray();
+        org.junit.jupiter.api.Assertions.assertArrayEquals(a, b);
+        String bad = resistiveAxial().set("alternator.winding.poles", 12).json();
+        post(PATH, bad).then().statusCode(422);
+        post(PATH, bad).then().statusCode(422);
+    }
+
     // ---- impossible input (422) -------------------------------------------------------------------------------
 
     @Test
