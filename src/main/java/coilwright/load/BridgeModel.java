@@ -22,6 +22,22 @@ final class BridgeModel {
     final double emfPeakV;
     /** Length of the symmetry interval: T/6 (three-phase) or T/2 (single-phase), s. */
     final double sweepS;
+    /**
+     * Ordered branch pairs (k up, j down) that can start conducting from the all-off state: pairK[p], pairJ[p],
+     * the phase pairPhi[p] of e_k - e_j = A cos(wt - phi) and the half-width theta of the window where
+     * e_k - e_j exceeds V0 (the same for every pair). Empty when theta is below {@link #MIN_WINDOW_RAD}.
+     */
+    final int[] pairK;
+    final int[] pairJ;
+    final double[] pairPhi;
+    final double windowHalfRad;
+
+    /**
+     * Smallest half-width of a conduction window, electrical radians. In a narrower window the current pulse
+     * (peak about I_sc * theta^3 with I_sc the short-circuit current) lies below the resolution of the
+     * closed-form waveforms, so it is taken as no conduction: the DC current dropped is below 1e-11 I_sc.
+     */
+    static final double MIN_WINDOW_RAD = 1e-3;
 
     BridgeModel(BridgeCircuit c) {
         w = 2 * Math.PI * c.frequencyHz();
@@ -53,7 +69,66 @@ final class BridgeModel {
             emfPeakV = peak / 2;
         }
         r = rWinding + rCable;
+        windowHalfRad = windowHalfRad(c.peakDrivingEmfV(), v0);
+        int pairs = windowHalfRad >= MIN_WINDOW_RAD ? m * (m - 1) : 0;
+        pairK = new int[pairs];
+        pairJ = new int[pairs];
+        pairPhi = new double[pairs];
+        int p = 0;
+        for (int k = 0; k < m && pairs > 0; k++) {
+            for (int j = 0; j < m; j++) {
+                if (j != k) {
+                    pairK[p] = k;
+                    pairJ[p] = j;
+                    pairPhi[p++] = Math.atan2(b[k] - b[j], a[k] - a[j]);
+                }
+            }
+        }
     }
+
+    /**
+     * Half-width of the interval around the peak where A cos(psi) exceeds v0, radians: acos(v0 / A), written as
+     * 2 asin(sqrt((A - v0) / 2A)) so that it stays accurate when A barely exceeds v0; 0 when A <= v0.
+     */
+    static double windowHalfRad(double peakV, double v0) {
+        return peakV > v0 ? 2 * Math.asin(Math.sqrt((peakV - v0) / (2 * peakV))) : 0;
+    }
+
+    /** True when a pair can conduct at all (its window is at least {@link #MIN_WINDOW_RAD} wide on each side). */
+    boolean conducts() {
+        return pairK.length > 0;
+    }
+
+    /**
+     * The pair whose window contains the electrical angle wt with at least half the minimum window still ahead
+     * (the most forward-biased one), or -1.
+     */
+    int pairInWindow(double t) {
+        int best = -1;
+        double bestCos = -2;
+        for (int p = 0; p < pairK.length; p++) {
+            double psi = Math.IEEEremainder(w * t - pairPhi[p], 2 * Math.PI);
+            if (psi >= -windowHalfRad - ANGLE_TOL_RAD && psi <= windowHalfRad - MIN_WINDOW_RAD / 2
+                    && Math.cos(psi) > bestCos) {
+                best = p;
+                bestCos = Math.cos(psi);
+            }
+        }
+        return best;
+    }
+
+    /** Time from t to the next window start of pair p, s (0 when a window starts at t). */
+    double timeToWindow(int p, double t) {
+        double psi = Math.IEEEremainder(w * t - pairPhi[p], 2 * Math.PI);
+        double ahead = -windowHalfRad - psi;
+        if (ahead < -ANGLE_TOL_RAD) {
+            ahead += 2 * Math.PI;
+        }
+        return Math.max(ahead, 0) / w;
+    }
+
+    /** Angle tolerance for window tests, radians (rounding of w t). */
+    static final double ANGLE_TOL_RAD = 1e-12;
 
     /** Branch EMF at time t, V. */
     double emf(int k, double t) {

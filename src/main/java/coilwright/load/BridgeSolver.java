@@ -28,11 +28,13 @@ public final class BridgeSolver {
      *
      * @param circuit the circuit (validated)
      * @return period averages; exactly zero currents when sqrt(2)*E_LL (three-phase) or sqrt(2)*E
-     *         (single-phase) does not exceed Vb + 2 Vd
+     *         (single-phase) does not exceed Vb + 2 Vd, or exceeds it so little that the window where it does is
+     *         narrower than {@link BridgeModel#MIN_WINDOW_RAD} on each side of the peak (a relative margin below
+     *         5e-7, where the true DC current is below 1e-11 of the short-circuit current)
      * @throws IllegalStateException if the periodic solution cannot be found (not expected for valid input)
      */
     public static BridgeOperatingPoint solve(BridgeCircuit circuit) {
-        if (circuit.peakDrivingEmfV() <= circuit.thresholdV()) {
+        if (BridgeModel.windowHalfRad(circuit.peakDrivingEmfV(), circuit.thresholdV()) < BridgeModel.MIN_WINDOW_RAD) {
             return BridgeResults.belowCutIn(circuit);
         }
         BridgeModel md = new BridgeModel(circuit);

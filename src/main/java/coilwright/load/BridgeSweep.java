@@ -1,6 +1,11 @@
 package coilwright.load;
 
 import org.apache.commons.math3.analysis.solvers.BrentSolver;
+import org.apache.commons.math3.optim.MaxEval;
+import org.apache.commons.math3.optim.nonlinear.scalar.GoalType;
+import org.apache.commons.math3.optim.univariate.BrentOptimizer;
+import org.apache.commons.math3.optim.univariate.SearchInterval;
+import org.apache.commons.math3.optim.univariate.UnivariateObjectiveFunction;
 
 import java.util.ArrayList;
 import java.util.List;
@@ -8,14 +13,22 @@ import java.util.List;
 /**
  * Follows the bridge circuit over one symmetry interval from a given state, switching conduction states
  * at diode events: a conducting diode's current reaching zero, or a blocked diode becoming forward-biased.
- * Events are bracketed by sampling the closed-form waveforms every {@link #SAMPLE_RAD} of electrical angle
- * and located with a Brent solver.
+ * With no diode conducting the next start is known in closed form (the window where a line-to-line EMF exceeds
+ * V0, see {@link BridgeModel#pairInWindow}). Otherwise events are bracketed by sampling the closed-form
+ * waveforms every {@link #SAMPLE_RAD} of electrical angle and located with a Brent solver.
+ * <p>
+ * Each event function is evaluated as a sum of terms of size up to the sum of its coefficient magnitudes, so
+ * its rounding noise is a fixed fraction of that sum. An event fires only when the function falls below minus
+ * this noise level (a hysteresis): a branch that has just started from zero current, whose current rises from
+ * a double root, cannot end again at the same instant on rounding noise.
  */
 final class BridgeSweep {
     /** Sampling step for bracketing events, electrical radians (1.5 degrees). */
     static final double SAMPLE_RAD = Math.toRadians(1.5);
     /** Event-time accuracy, electrical radians. */
     static final double EVENT_ACCURACY_RAD = 1e-14;
+    /** Noise level of an event function relative to the sum of its coefficient magnitudes. */
+    static final double NOISE = 1e-13;
     private static final int MAX_EVENTS = 200;
     private static final int MAX_BRENT_EVALUATIONS = 200;
 
@@ -24,18 +37,34 @@ final class BridgeSweep {
     private static final int JOIN_DOWN = 2;
     private static final int PAIR = 3;
 
-    final List<BridgeSegment> segments = new ArrayList<>();
-    final List<Double> durations = new ArrayList<>();
+    final List<BridgeSegment> segments = new ArrayList<>(8);
+    final List<Double> durations = new ArrayList<>(8);
     final double[] end;
     final double t0;
 
     private final BridgeModel md;
     private final double tolV;
+    private final double[][] fns;
+    private final int[] fnType;
+    private final int[] fnBranch;
+    private final double[] fnTol;
+    private final double[] prev;
+    private final double[] bs = new double[BridgeSegment.NB];
+    private double evTau;
+    private int evType;
+    private int evK;
+    private int evJ;
 
     BridgeSweep(BridgeModel md, double t0, double[] x0) {
         this.md = md;
         this.t0 = t0;
         this.tolV = 1e-12 * (md.emfPeakV + md.v0);
+        int nf = 2 * md.m;
+        fns = new double[nf][BridgeSegment.NB];
+        fnType = new int[nf];
+        fnBranch = new int[nf];
+        fnTol = new double[nf];
+        prev = new double[nf];
         double tEnd = t0 + md.sweepS;
         double[] x = x0.clone();
         int[] sign = new int[md.m];
@@ -57,20 +86,20 @@ final class BridgeSweep {
                 throw new IllegalStateException("bridge solver: more than " + MAX_EVENTS
                         + " switching events in one interval (w = " + md.w + " rad/s, V0 = " + md.v0 + " V)");
             }
-            double[] ev = findEvent(seg, tEnd - t);
-            if (ev == null) {
+            boolean found = seg.off() ? offEvent(t, tEnd - t) : findEvent(seg, tEnd - t);
+            if (!found) {
                 segments.add(seg);
                 durations.add(tEnd - t);
                 x = new double[md.m];
                 seg.currentsAt(tEnd - t, x);
                 break;
             }
-            double tau = ev[0];
+            double tau = evTau;
             segments.add(seg);
             durations.add(tau);
             seg.currentsAt(tau, x);
             t += tau;
-            seg = transition(seg, (int) ev[1], (int) ev[2], (int) ev[3], t, x);
+            seg = transition(seg, evType, evK, evJ, t, x);
         }
         end = x;
     }
@@ -96,6 +125,7 @@ final class BridgeSweep {
             case JOIN_DOWN -> sign[k] = -1;
             default -> {
                 java.util.Arrays.fill(x, 0);
+                java.util.Arrays.fill(sign, 0);
                 sign[k] = 1;
                 sign[j] = -1;
             }
@@ -110,30 +140,19 @@ final class BridgeSweep {
             if (pass > md.m) {
                 return seg;
             }
-            double worst = -tolV;
-            int worstK = -1;
-            int worstJ = -1;
-            int worstSign = 0;
             if (seg.off()) {
-                for (int k = 0; k < md.m; k++) {
-                    for (int i = 0; i < md.m; i++) {
-                        double margin = md.v0 - (md.emf(k, t) - md.emf(i, t));
-                        if (i != k && margin < worst) {
-                            worst = margin;
-                            worstK = k;
-                            worstJ = i;
-                        }
-                    }
-                }
-                if (worstK < 0) {
+                int p = md.pairInWindow(t);
+                if (p < 0) {
                     return seg;
                 }
-                sign[worstK] = 1;
-                sign[worstJ] = -1;
+                sign[md.pairK[p]] = 1;
+                sign[md.pairJ[p]] = -1;
                 java.util.Arrays.fill(x, 0);
                 continue;
             }
-            double[] bs = new double[BridgeSegment.NB];
+            double worst = -tolV;
+            int worstK = -1;
+            int worstSign = 0;
             seg.basis(0, bs);
             double uUp = BridgeSegment.dot(seg.uUp, bs);
             double uDown = BridgeSegment.dot(seg.uDown, bs);
@@ -160,88 +179,159 @@ final class BridgeSweep {
         }
     }
 
-    /** Returns {tau, type, k, j} of the first event within (0, remaining], or null. */
-    private double[] findEvent(BridgeSegment seg, double remaining) {
-        List<double[]> fns = new ArrayList<>();
-        List<int[]> tags = new ArrayList<>();
-        eventFunctions(seg, fns, tags);
-        int nf = fns.size();
-        double[] prev = new double[nf];
-        double[] bs = new double[BridgeSegment.NB];
+    /** With no diode conducting: the next window start within (0, remaining], from the closed form. */
+    private boolean offEvent(double t, double remaining) {
+        double best = Double.POSITIVE_INFINITY;
+        int bestP = -1;
+        for (int p = 0; p < md.pairK.length; p++) {
+            double tau = md.timeToWindow(p, t);
+            if (tau < best) {
+                best = tau;
+                bestP = p;
+            }
+        }
+        if (bestP < 0 || best > remaining) {
+            return false;
+        }
+        evTau = best;
+        evType = PAIR;
+        evK = md.pairK[bestP];
+        evJ = md.pairJ[bestP];
+        return true;
+    }
+
+    /** Finds the first event of a conducting segment within (0, remaining]; sets evTau, evType, evK, evJ. */
+    private boolean findEvent(BridgeSegment seg, double remaining) {
+        int nf = eventFunctions(seg);
         seg.basis(0, bs);
         for (int f = 0; f < nf; f++) {
-            prev[f] = BridgeSegment.dot(fns.get(f), bs);
+            prev[f] = BridgeSegment.dot(fns[f], bs);
+            if (prev[f] < -fnTol[f]) {
+                return fire(0, f);
+            }
         }
         double step = SAMPLE_RAD / md.w;
+        // the basis is advanced by recurrence between samples (exact re-evaluation before any decision)
+        double cStep = Math.cos(SAMPLE_RAD);
+        double sStep = Math.sin(SAMPLE_RAD);
+        double e1Step = Math.exp(seg.lambda1 * step);
+        double e2Step = Math.exp(seg.lambda2 * step);
+        double[] rb = bs.clone();
         double lo = 0;
         while (lo < remaining) {
-            double hi = Math.min(lo + step, remaining);
-            seg.basis(hi, bs);
+            double hi = lo + step;
+            if (hi >= remaining) {
+                hi = remaining;
+                seg.basis(hi, rb);
+            } else {
+                double c = rb[0] * cStep - rb[1] * sStep;
+                rb[1] = rb[1] * cStep + rb[0] * sStep;
+                rb[0] = c;
+                rb[3] *= e1Step;
+                rb[4] *= e2Step;
+            }
             double best = Double.POSITIVE_INFINITY;
             int bestF = -1;
+            boolean exact = hi == remaining;
             for (int f = 0; f < nf; f++) {
-                double v = BridgeSegment.dot(fns.get(f), bs);
-                if (v < 0) {
-                    double root = prev[f] >= 0 ? locate(seg, fns.get(f), lo, hi) : lo;
-                    if (root < best) {
-                        best = root;
-                        bestF = f;
+                double v = BridgeSegment.dot(fns[f], rb);
+                if (v < -fnTol[f]) {
+                    if (!exact) {
+                        seg.basis(hi, rb);
+                        exact = true;
+                        v = BridgeSegment.dot(fns[f], rb);
+                    }
+                    if (v < -fnTol[f]) {
+                        double root = locate(seg, f, lo, hi);
+                        if (root < best) {
+                            best = root;
+                            bestF = f;
+                        }
                     }
                 }
                 prev[f] = v;
             }
             if (bestF >= 0) {
-                int[] tag = tags.get(bestF);
-                return new double[] {best, tag[0], tag[1], tag[2]};
+                return fire(best, bestF);
+            }
+            if (exact && hi < remaining) {
+                // keep the recurrence anchored on the exact values
+                seg.basis(hi, rb);
             }
             lo = hi;
         }
-        return null;
+        return false;
     }
 
-    private double locate(BridgeSegment seg, double[] fn, double lo, double hi) {
-        double[] bs = new double[BridgeSegment.NB];
+    private boolean fire(double tau, int f) {
+        evTau = tau;
+        evType = fnType[f];
+        evK = fnBranch[f];
+        evJ = -1;
+        return true;
+    }
+
+    /**
+     * The crossing of function f in [lo, hi], given f(hi) below minus its noise level. From a clearly positive
+     * start the zero crossing is located; from a start within the noise band (a branch that has just started)
+     * the function's maximum in the step is found first, and if that too is within the noise band the event is
+     * where the function leaves the band downwards.
+     */
+    private double locate(BridgeSegment seg, int f, double lo, double hi) {
+        double[] fn = fns[f];
+        double tol = fnTol[f];
+        double[] b = new double[BridgeSegment.NB];
+        double flo = value(seg, fn, lo, b);
         BrentSolver solver = new BrentSolver(1e-15, EVENT_ACCURACY_RAD / md.w);
-        return solver.solve(MAX_BRENT_EVALUATIONS, tau -> {
-            seg.basis(tau, bs);
-            return BridgeSegment.dot(fn, bs);
-        }, lo, hi);
+        if (flo > tol) {
+            return solver.solve(MAX_BRENT_EVALUATIONS, tau -> value(seg, fn, tau, b), lo, hi);
+        }
+        double peakTau = new BrentOptimizer(1e-10, EVENT_ACCURACY_RAD / md.w).optimize(new MaxEval(MAX_BRENT_EVALUATIONS),
+                new UnivariateObjectiveFunction(tau -> value(seg, fn, tau, b)), GoalType.MAXIMIZE,
+                new SearchInterval(lo, hi)).getPoint();
+        if (value(seg, fn, peakTau, b) > tol) {
+            return solver.solve(MAX_BRENT_EVALUATIONS, tau -> value(seg, fn, tau, b), peakTau, hi);
+        }
+        if (flo + tol <= 0) {
+            return lo;
+        }
+        return solver.solve(MAX_BRENT_EVALUATIONS, tau -> value(seg, fn, tau, b) + tol, lo, hi);
     }
 
-    /** Event functions, each >= 0 while the segment's state is valid. */
-    private void eventFunctions(BridgeSegment seg, List<double[]> fns, List<int[]> tags) {
-        if (seg.off()) {
-            for (int k = 0; k < md.m; k++) {
-                for (int j = 0; j < md.m; j++) {
-                    if (j != k) {
-                        fns.add(new double[] {-(md.a[k] - md.a[j]), -(md.b[k] - md.b[j]), md.v0, 0, 0});
-                        tags.add(new int[] {PAIR, k, j});
-                    }
-                }
-            }
-            return;
-        }
+    private static double value(BridgeSegment seg, double[] fn, double tau, double[] b) {
+        seg.basis(tau, b);
+        return BridgeSegment.dot(fn, b);
+    }
+
+    /** Fills the event functions of a conducting segment, each >= 0 while the state is valid; returns their count. */
+    private int eventFunctions(BridgeSegment seg) {
+        int nf = 0;
         for (int k = 0; k < md.m; k++) {
             if (seg.sign[k] != 0) {
-                double[] f = seg.current[k].clone();
                 for (int i = 0; i < BridgeSegment.NB; i++) {
-                    f[i] *= seg.sign[k];
+                    fns[nf][i] = seg.current[k][i] * seg.sign[k];
                 }
-                fns.add(f);
-                tags.add(new int[] {CURRENT, k, -1});
+                tag(nf++, CURRENT, k);
             } else {
-                double[] e = seg.emf(k);
-                double[] fu = new double[BridgeSegment.NB];
-                double[] fd = new double[BridgeSegment.NB];
                 for (int i = 0; i < BridgeSegment.NB; i++) {
-                    fu[i] = seg.uUp[i] - e[i];
-                    fd[i] = e[i] - seg.uDown[i];
+                    double e = i == 0 ? md.a[k] : i == 1 ? md.b[k] : 0;
+                    fns[nf][i] = seg.uUp[i] - e;
+                    fns[nf + 1][i] = e - seg.uDown[i];
                 }
-                fns.add(fu);
-                tags.add(new int[] {JOIN_UP, k, -1});
-                fns.add(fd);
-                tags.add(new int[] {JOIN_DOWN, k, -1});
+                tag(nf++, JOIN_UP, k);
+                tag(nf++, JOIN_DOWN, k);
             }
         }
+        return nf;
+    }
+
+    private void tag(int f, int type, int k) {
+        fnType[f] = type;
+        fnBranch[f] = k;
+        double sum = 0;
+        for (double c : fns[f]) {
+            sum += Math.abs(c);
+        }
+        fnTol[f] = NOISE * sum;
     }
 }
