@@ -1,6 +1,9 @@
 package coilwright;
 
+import coilwright.service.ExampleFiles;
 import coilwright.service.Services;
+import coilwright.store.Database;
+import coilwright.store.DatabaseSettings;
 import coilwright.web.AppConfig;
 import coilwright.web.ErrorMapping;
 import coilwright.web.HealthHandler;
@@ -13,11 +16,17 @@ import coilwright.web.Units;
 import coilwright.web.api.ApiV1;
 import coilwright.web.pages.HomePage;
 import coilwright.web.pages.ThymeleafRenderer;
+import coilwright.web.saved.SavedDesigns;
 import io.javalin.Javalin;
 import io.javalin.http.staticfiles.Location;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Optional;
+import java.util.concurrent.ExecutorService;
+import java.util.concurrent.Executors;
+import java.util.concurrent.TimeUnit;
 import java.util.concurrent.atomic.AtomicBoolean;
+import java.util.function.BooleanSupplier;
 import org.slf4j.Logger;
 import org.slf4j.LoggerFactory;
 
@@ -31,12 +40,19 @@ public final class App {
     private final Javalin javalin;
     private final AppConfig config;
     private final List<Route> routes;
+    private final Database database;
+    private final Services services;
+    private final ExecutorService demoLoader = Executors.newSingleThreadExecutor(r -> new Thread(r, "coilwright-demos"));
 
     private App(AppConfig config, List<Route> extraRoutes) {
         this.config = config;
-        AtomicBoolean ready = new AtomicBoolean(false);
+        this.database = Database.open(DatabaseSettings.resolve(config.dataDir(), Optional.of(config.dbUrl()),
+                Optional.ofNullable(System.getenv("COILWRIGHT_DB_USER")),
+                Optional.ofNullable(System.getenv("COILWRIGHT_DB_PASSWORD"))));
+        this.services = Services.create(database, Json.mapper());
+        AtomicBoolean started = new AtomicBoolean(false);
+        BooleanSupplier ready = () -> started.get() && database.isReachable(2);
         Metrics metrics = new Metrics();
-        Services services = Services.create();
         List<Route> table = new ArrayList<>(routeTable(ready, metrics, services));
         table.addAll(extraRoutes);
         this.routes = List.copyOf(table);
@@ -55,18 +71,19 @@ public final class App {
             cfg.routes.before(Units::remember);
             ErrorMapping.register(cfg.routes);
             routes.forEach(r -> cfg.routes.addHttpHandler(r.method(), r.path(), r.handler()));
-            cfg.events.serverStarted(() -> ready.set(true));
-            cfg.events.serverStopping(() -> ready.set(false));
+            cfg.events.serverStarted(() -> started.set(true));
+            cfg.events.serverStopping(() -> started.set(false));
         });
     }
 
     /** Every route of the service. Handlers are thin and live in {@code coilwright.web}. */
-    private static List<Route> routeTable(AtomicBoolean ready, Metrics metrics, Services services) {
+    private static List<Route> routeTable(BooleanSupplier ready, Metrics metrics, Services services) {
         List<Route> r = new ArrayList<>(List.of(
-                Route.get("/health", new HealthHandler(ready::get)),
+                Route.get("/health", new HealthHandler(ready)),
                 Route.get("/metrics", metrics),
                 Route.get("/api/v1/openapi.json", new OpenApiHandler()),
                 Route.get("/", new HomePage())));
+        r.addAll(SavedDesigns.routes(services));
         r.addAll(ApiV1.routes(services));
         return r;
     }
@@ -83,8 +100,21 @@ public final class App {
 
     /** Starts listening; port 0 picks a free port (see {@link #port()}). */
     public App start(String host, int port) {
-        javalin.start(host, port);
+        try {
+            javalin.start(host, port);
+        } catch (RuntimeException e) {
+            database.close();
+            throw e;
+        }
+        demoLoader.execute(this::loadDemos);
+        demoLoader.shutdown();
         return this;
+    }
+
+    /** Stores the example designs as demos (idempotent; unchanged examples cost no evaluation). */
+    private void loadDemos() {
+        List<String> slugs = services.designs().loadDemos(ExampleFiles.read(App.class.getClassLoader()));
+        LOG.info("demo designs ready: {}", slugs);
     }
 
     public App start() {
@@ -95,8 +125,22 @@ public final class App {
         return javalin.port();
     }
 
+    /** Stops listening, waits for the demo loader, and closes the database. */
     public void stop() {
         javalin.stop();
+        demoLoader.shutdown();
+        try {
+            if (!demoLoader.awaitTermination(60, TimeUnit.SECONDS)) {
+                LOG.warn("the demo loader is still running; closing the database anyway");
+            }
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+        }
+        database.close();
+    }
+
+    public Services services() {
+        return services;
     }
 
     public AppConfig config() {
@@ -117,7 +161,14 @@ public final class App {
             System.exit(2);
             return;
         }
-        App app = create(config).start();
+        App app;
+        try {
+            app = create(config).start();
+        } catch (coilwright.store.StoreException e) {
+            System.err.println("coilwright: " + e.getMessage());
+            System.exit(1);
+            return;
+        }
         LOG.info("Coilwright listening on http://localhost:{}/ (data in {})", app.port(), config.dataDir().toAbsolutePath());
         Runtime.getRuntime().addShutdownHook(new Thread(app::stop, "coilwright-stop"));
     }

@@ -1,23 +1,13 @@
 package coilwright.web.api;
 
 import coilwright.service.DesignDocument;
+import coilwright.service.ExampleFiles;
 import coilwright.web.NotFoundException;
 import coilwright.web.RecordBinder;
-import java.io.IOException;
-import java.io.UncheckedIOException;
-import java.net.URI;
-import java.net.URISyntaxException;
-import java.net.URL;
-import java.nio.charset.StandardCharsets;
-import java.nio.file.FileSystem;
-import java.nio.file.FileSystems;
-import java.nio.file.Files;
-import java.nio.file.Path;
 import java.util.Collections;
 import java.util.List;
 import java.util.Map;
 import java.util.TreeMap;
-import java.util.stream.Stream;
 
 /**
  * The invented example designs, {@code examples/<slug>.json} on the classpath (a directory in development, a jar
@@ -25,7 +15,6 @@ import java.util.stream.Stream;
  * fault, not a user's.
  */
 public final class ExampleLibrary {
-    static final String FOLDER = "examples";
     private final Map<String, DesignDocument> bySlug;
 
     ExampleLibrary(Map<String, DesignDocument> bySlug) {
@@ -39,34 +28,8 @@ public final class ExampleLibrary {
 
     /** As {@link #fromClasspath} from a given class loader's {@code examples/} folder (a directory or in a jar). */
     static ExampleLibrary fromClassLoader(ClassLoader loader, RecordBinder binder) {
-        URL url = loader.getResource(FOLDER);
-        if (url == null) {
-            throw new IllegalStateException("no " + FOLDER + " folder on the classpath");
-        }
-        try {
-            URI uri = url.toURI();
-            if (!"jar".equals(uri.getScheme())) {
-                return read(Path.of(uri), binder);
-            }
-            try (FileSystem jar = FileSystems.newFileSystem(uri, Map.of())) {
-                return read(jar.getPath("/" + FOLDER), binder);
-            }
-        } catch (IOException e) {
-            throw new UncheckedIOException(e);
-        } catch (URISyntaxException e) {
-            throw new IllegalStateException("bad classpath URL " + url, e);
-        }
-    }
-
-    private static ExampleLibrary read(Path folder, RecordBinder binder) throws IOException {
         Map<String, DesignDocument> docs = new TreeMap<>();
-        try (Stream<Path> files = Files.list(folder)) {
-            for (Path file : files.filter(f -> f.getFileName().toString().endsWith(".json")).toList()) {
-                String name = file.getFileName().toString();
-                String json = Files.readString(file, StandardCharsets.UTF_8);
-                docs.put(name.substring(0, name.length() - ".json".length()), bind(binder, name, json));
-            }
-        }
+        ExampleFiles.read(loader).forEach((slug, json) -> docs.put(slug, bind(binder, slug + ".json", json)));
         return new ExampleLibrary(docs);
     }
 

@@ -1,0 +1,130 @@
+package coilwright.web.saved;
+
+import coilwright.service.DesignDocument;
+import coilwright.service.DesignLibrary;
+import coilwright.service.Recomputation;
+import coilwright.store.SaveOutcome;
+import coilwright.store.StoredRevision;
+import coilwright.web.Json;
+import coilwright.web.NotFoundException;
+import coilwright.web.RecordBinder;
+import com.fasterxml.jackson.core.JsonProcessingException;
+import io.javalin.http.Context;
+import io.javalin.http.UploadedFile;
+
+import java.io.IOException;
+import java.io.InputStream;
+import java.io.UncheckedIOException;
+import java.nio.charset.StandardCharsets;
+import java.util.HashMap;
+import java.util.Map;
+
+/** The pages of saved designs. Title and notes are user text: templates show them with th:text only. */
+final class SavedDesignPages {
+    private final DesignLibrary library;
+    private final RecordBinder binder = new RecordBinder(Json.mapper());
+
+    SavedDesignPages(DesignLibrary library) {
+        this.library = library;
+    }
+
+    void newForm(Context ctx) {
+        ctx.render("saved-new", Map.of("title", "Save or import a design"));
+    }
+
+    void save(Context ctx) {
+        SaveOutcome outcome = library.save(binder.bind(submitted(ctx), DesignDocument.class));
+        ctx.status(outcome.created() ? 201 : 200).render("saved-created", Map.of("outcome", outcome,
+                "rev", library.revision(outcome.revisionId())));
+    }
+
+    void latest(Context ctx) {
+        show(ctx, library.latest(ctx.pathParam("designId")), false);
+    }
+
+    void revision(Context ctx) {
+        show(ctx, ofDesign(ctx), false);
+    }
+
+    void recomputed(Context ctx) {
+        show(ctx, ofDesign(ctx), true);
+    }
+
+    void print(Context ctx) {
+        StoredRevision r = ofDesign(ctx);
+        ctx.render("saved-print", Map.of("rev", r, "results", ResultView.of(library.tree(r.resultJson()))));
+    }
+
+    void reviseForm(Context ctx) {
+        StoredRevision r = library.latest(ctx.pathParam("designId"));
+        ctx.render("saved-revise", Map.of("rev", r, "document", pretty(library.document(r))));
+    }
+
+    void revise(Context ctx) {
+        DesignDocument doc = binder.bind(submitted(ctx), DesignDocument.class);
+        SaveOutcome o = library.revise(ctx.pathParam("designId"), ctx.formParam("editToken"), doc);
+        ctx.redirect("/d/" + o.designId() + "/r/" + o.revisionId(), io.javalin.http.HttpStatus.SEE_OTHER);
+    }
+
+    void compare(Context ctx) {
+        String a = ctx.queryParam("a");
+        String b = ctx.queryParam("b");
+        Map<String, Object> model = new HashMap<>(Map.of("a", a == null ? "" : a, "b", b == null ? "" : b));
+        if (a != null && !a.isBlank() && b != null && !b.isBlank()) {
+            model.put("comparison", Comparison.of(library, library.resolve(a.strip()), library.resolve(b.strip())));
+        }
+        ctx.render("saved-compare", model);
+    }
+
+    void demos(Context ctx) {
+        ctx.render("saved-demos", Map.of("demos", library.demos()));
+    }
+
+    private void show(Context ctx, StoredRevision r, boolean recomputedView) {
+        Recomputation again = library.recompute(r);
+        Map<String, Object> model = new HashMap<>();
+        model.put("rev", r);
+        model.put("history", library.history(r.designId()));
+        model.put("again", again);
+        model.put("recomputedView", recomputedView);
+        model.put("results", ResultView.of(recomputedView && again.results().isPresent() ? again.results().get()
+                : library.tree(r.resultJson())));
+        ctx.render("saved-revision", model);
+    }
+
+    /** The revision named in the path, which must belong to the design named in the path. */
+    private StoredRevision ofDesign(Context ctx) {
+        StoredRevision r = library.revision(ctx.pathParam("revisionId"));
+        if (!r.designId().equals(ctx.pathParam("designId"))) {
+            throw new NotFoundException("The design at this address has no revision " + r.revisionId() + ".");
+        }
+        return r;
+    }
+
+    /** The design file from an uploaded {@code file} when one was chosen, else the {@code document} text field. */
+    private static String submitted(Context ctx) {
+        UploadedFile file = isMultipart(ctx) ? ctx.uploadedFile("file") : null;
+        if (file != null && file.size() > 0) {
+            try (InputStream in = file.content()) {
+                return new String(in.readAllBytes(), StandardCharsets.UTF_8);
+            } catch (IOException e) {
+                throw new UncheckedIOException(e);
+            }
+        }
+        String text = ctx.formParam("document");
+        return text == null ? "" : text;
+    }
+
+    private static boolean isMultipart(Context ctx) {
+        String type = ctx.contentType();
+        return type != null && type.toLowerCase(java.util.Locale.ROOT).startsWith("multipart/");
+    }
+
+    private static String pretty(DesignDocument doc) {
+        try {
+            return Json.mapper().writerWithDefaultPrettyPrinter().writeValueAsString(doc);
+        } catch (JsonProcessingException e) {
+            throw new IllegalStateException("cannot write the design file: " + e.getOriginalMessage(), e);
+        }
+    }
+}
