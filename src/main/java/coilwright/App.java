@@ -15,6 +15,7 @@ import coilwright.web.Route;
 import coilwright.web.Units;
 import coilwright.web.pages.DesignPages;
 import coilwright.web.match.MatchRoutes;
+import coilwright.web.api.ApiV1;
 import coilwright.web.pages.HomePage;
 import coilwright.web.pages.ThymeleafRenderer;
 import coilwright.web.rewind.RewindRoutes;
@@ -89,6 +90,7 @@ public final class App {
         r.addAll(DesignPages.routes(services));
         r.addAll(MatchRoutes.routes(services));
         r.addAll(RewindRoutes.routes(services));
+        r.addAll(ApiV1.routes(services));
         return r;
     }
 
