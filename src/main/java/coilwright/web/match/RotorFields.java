@@ -27,9 +27,9 @@ public record RotorFields(double diameterM, int bladeCount, double cpMax, double
         c.throwIfAny();
     }
 
-    /** A 3.6 m three-blade rotor, Cp 0.42 at tip-speed ratio 6.5, furling at 450 rpm, direct drive. */
+    /** A 3 m three-blade rotor, Cp 0.40 at tip-speed ratio 7, furling at 500 rpm, direct drive (the axial example's rotor). */
     static RotorFields defaults() {
-        return new RotorFields(3.6, 3, 0.42, 6.5, 450, 1.0, 1.0);
+        return new RotorFields(3.0, 3, 0.40, 7.0, 500, 1.0, 1.0);
     }
 
     WindRotor toRotor() {

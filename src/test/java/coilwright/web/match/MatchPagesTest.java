@@ -45,7 +45,7 @@ class MatchPagesTest {
         given().queryParam("example", "axial-wind-24v").get("/match/wind").then().statusCode(200)
                 .contentType(startsWith("text/html"))
                 .body(containsString("Axial-flux alternator for a 3 m wind rotor"))
-                .body(containsString("id=\"rotor.diameterM\" name=\"rotor.diameterM\" value=\"3.6\""))
+                .body(containsString("id=\"rotor.diameterM\" name=\"rotor.diameterM\" value=\"3.0\""))
                 .body(not(containsString("id=\"results\"")));
     }
 
