@@ -66,10 +66,10 @@ public final class Database implements AutoCloseable {
                 .locations("classpath:db/migration");
         settings.schema().ifPresent(s -> configuration.schemas(s).defaultSchema(s).createSchemas(true));
         targetVersion.ifPresent(configuration::target);
-        Flyway flyway = configuration.load();
-        flyway.migrate();
-        var current = flyway.info().current();
-        return current == null ? "" : current.getVersion().getVersion();
+        // the migrate result names the version reached; asking flyway.info() would scan the database a second time
+        var result = configuration.load().migrate();
+        String reached = result.targetSchemaVersion != null ? result.targetSchemaVersion : result.initialSchemaVersion;
+        return reached == null ? "" : reached;
     }
 
     public DataSource dataSource() {
