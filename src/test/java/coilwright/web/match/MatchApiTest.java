@@ -1,5 +1,6 @@
 package coilwright.web.match;
 
+import coilwright.web.OpenApiContract;
 import coilwright.web.TestApp;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.node.ObjectNode;
@@ -82,7 +83,7 @@ class MatchApiTest {
                 .body("matchingPercent", lessThanOrEqualTo(100.0))
                 .body("windClass.windClass", equalTo("IV"))
                 .body("cautions[0].code", equalTo("OPEN_CIRCUIT_VOLTAGE"));
-        MatchContract.assertMatches(r, "/api/v1/match/wind", "POST");
+        OpenApiContract.assertMatches(r, "/api/v1/match/wind", "POST");
     }
 
     @Test
@@ -104,7 +105,7 @@ class MatchApiTest {
         r.then().statusCode(400).contentType(containsString("application/problem+json"))
                 .body("errors.field", hasItems("rotor.diameterM", "rotor.curve.cpMax", "wind.meanWindSpeedMs"))
                 .body("errors.find { it.field == 'rotor.curve.cpMax' }.message", containsString("Betz"));
-        MatchContract.assertMatches(r, "/api/v1/match/wind", "POST");
+        OpenApiContract.assertMatches(r, "/api/v1/match/wind", "POST");
     }
 
     @Test
@@ -123,7 +124,7 @@ class MatchApiTest {
         ((ObjectNode) b.get("rotor")).put("maxRotorSpeedRpm", 50);
         Response r = post("/api/v1/match/wind", b);
         r.then().statusCode(422).body("detail", containsString("never delivers power"));
-        MatchContract.assertMatches(r, "/api/v1/match/wind", "POST");
+        OpenApiContract.assertMatches(r, "/api/v1/match/wind", "POST");
     }
 
     @Test
@@ -136,7 +137,7 @@ class MatchApiTest {
                 .body("openCircuitLineRmsVAtRunaway", greaterThan(0.0))
                 .body("annualEnergyKWh", greaterThan(0.0))
                 .body("cautions[0].code", equalTo("OPEN_CIRCUIT_VOLTAGE"));
-        MatchContract.assertMatches(r, "/api/v1/match/hydro", "POST");
+        OpenApiContract.assertMatches(r, "/api/v1/match/hydro", "POST");
         double runnerW = r.path("matched.runnerPowerW");
         double battery = r.path("matched.powerToBatteryW");
         assertTrue(battery > 0 && battery < runnerW);
@@ -150,7 +151,7 @@ class MatchApiTest {
         ((ObjectNode) b.get("runner")).put("kind", "WATERWHEEL");
         Response r = post("/api/v1/match/hydro", b);
         r.then().statusCode(400).body("errors.field", hasItems("site.grossHeadM", "penstock.innerDiameterM", "runner.kind"));
-        MatchContract.assertMatches(r, "/api/v1/match/hydro", "POST");
+        OpenApiContract.assertMatches(r, "/api/v1/match/hydro", "POST");
         List<String> messages = r.path("errors.message");
         assertTrue(messages.stream().anyMatch(m -> m.startsWith("site.grossHeadM = -5")), messages.toString());
     }

@@ -1,5 +1,6 @@
 package coilwright.web.rewind;
 
+import coilwright.web.OpenApiContract;
 import static io.restassured.RestAssured.given;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
@@ -53,7 +54,7 @@ class RewindApiTest {
     void a_measured_machine_gets_a_plan_that_matches_its_documented_schema() {
         Response r = post(PLAN, Bodies.request());
         r.then().statusCode(200).contentType(startsWith("application/json"));
-        RewindContract.assertMatches(r, PLAN);
+        OpenApiContract.assertMatches(r, PLAN, "POST");
         JsonPath j = r.jsonPath();
         assertEquals(Bodies.VOLTS / Bodies.RPM, j.getDouble("characterisation.keLineRmsVPerRpm.value"), EXACT);
         // voltage 1 % and speed 1 % in quadrature (GUM): sqrt(2) %
@@ -112,7 +113,7 @@ class RewindApiTest {
         Bodies.measurements(body).put("lineInductanceH", 0.004);
         Response r = post(PLAN, body);
         r.then().statusCode(200);
-        RewindContract.assertMatches(r, PLAN);
+        OpenApiContract.assertMatches(r, PLAN, "POST");
         JsonPath j = r.jsonPath();
         String now = "reconnections.find { it.unchanged }";
         double current = j.getDouble(now + ".output.phaseCurrentRmsA");
@@ -140,7 +141,7 @@ class RewindApiTest {
         ((ObjectNode) body.get("machine")).putObject("coilWindow").put("areaM2", 0.016 * 0.013).put("kind", "AIR_CORED");
         Response r = post(PLAN, body);
         r.then().statusCode(200);
-        RewindContract.assertMatches(r, PLAN);
+        OpenApiContract.assertMatches(r, PLAN, "POST");
         List<Object> fills = r.jsonPath().getList("rewinds.wireChoices.flatten().fill");
         assertFalse(fills.isEmpty());
         assertTrue(fills.stream().allMatch(f -> f instanceof Map<?, ?> m && m.containsKey("level")), fills.toString());
@@ -158,7 +159,7 @@ class RewindApiTest {
         ObjectNode body = Bodies.request();
         ((ObjectNode) body.get("machine")).put("poles", 14);
         Response r = post(PLAN, body);
-        RewindContract.assertMatches(r, PLAN);
+        OpenApiContract.assertMatches(r, PLAN, "POST");
         r.then().statusCode(400).contentType(startsWith("application/problem+json"))
                 .body("errors.size()", equalTo(1))
                 .body("errors[0].field", equalTo("machine.poles"))
@@ -171,7 +172,7 @@ class RewindApiTest {
         ObjectNode body = Bodies.request();
         Bodies.measurements(body).put("lineResistanceOhm", 1e-5);
         Response r = post(PLAN, body);
-        RewindContract.assertMatches(r, PLAN);
+        OpenApiContract.assertMatches(r, PLAN, "POST");
         r.then().statusCode(400)
                 .body("errors[0].field", equalTo("machine.measurements.lineResistanceOhm"))
                 .body("errors[0].message", startsWith("machine.measurements.lineResistanceOhm = 1.0E-5: too low for"
@@ -198,7 +199,7 @@ class RewindApiTest {
                 .then().statusCode(400).body("errors[0].field", equalTo("machine.measurements.measuredSpeedRpm"))
                 .body("errors[0].message", containsString("must be a finite number"));
         Response token = post(PLAN, text.replace("\"measuredSpeedRpm\":300.0", "\"measuredSpeedRpm\":NaN"));
-        RewindContract.assertMatches(token, PLAN);
+        OpenApiContract.assertMatches(token, PLAN, "POST");
         token.then().statusCode(400).body("type", equalTo("/problems/malformed-json"));
     }
 
@@ -210,7 +211,7 @@ class RewindApiTest {
         Bodies.measurements(body).put("voltageAccuracyPercent", 80);
         ((ObjectNode) body.get("machine").get("wire")).put("awg", 99);
         Response r = post(PLAN, body);
-        RewindContract.assertMatches(r, PLAN);
+        OpenApiContract.assertMatches(r, PLAN, "POST");
         r.then().statusCode(400).body("errors.field", hasItems("machine.turnsPerCoil", "target.targetSpeedRpm",
                 "machine.measurements.voltageAccuracyPercent", "machine.wire.awg"));
     }
@@ -228,7 +229,7 @@ class RewindApiTest {
         ((ObjectNode) body.get("machine")).put("poles", 12);
         Bodies.measurements(body).put("measuredFrequencyHz", 0);
         Response r = post(PLAN, body);
-        RewindContract.assertMatches(r, PLAN);
+        OpenApiContract.assertMatches(r, PLAN, "POST");
         r.then().statusCode(422).body("type", equalTo("/problems/infeasible-design"))
                 .body("field", equalTo("machine.slots"));
     }
@@ -239,7 +240,7 @@ class RewindApiTest {
         // kw1 = 0.933, with 8 or 16 poles 0.866; 12 slots / 12 poles is not a balanced winding
         Response r = post(STATOR, "{\"slots\":12,\"phases\":3,\"layers\":\"DOUBLE\",\"minPoles\":8,\"maxPoles\":16}");
         r.then().statusCode(200);
-        RewindContract.assertMatches(r, STATOR);
+        OpenApiContract.assertMatches(r, STATOR, "POST");
         JsonPath j = r.jsonPath();
         List<Integer> poles = j.getList("options.poles");
         assertEquals(List.of(10, 14), poles.subList(0, 2).stream().sorted().toList());
@@ -252,7 +253,7 @@ class RewindApiTest {
     @Test
     void stator_options_refuse_bad_counts_all_at_once() {
         Response r = post(STATOR, "{\"slots\":1,\"phases\":2,\"layers\":\"DOUBLE\",\"minPoles\":20,\"maxPoles\":10}");
-        RewindContract.assertMatches(r, STATOR);
+        OpenApiContract.assertMatches(r, STATOR, "POST");
         r.then().statusCode(400).body("errors.field", hasItems("slots", "phases", "maxPoles"))
                 .body("errors.find { it.field == 'maxPoles' }.message", equalTo("maxPoles = 10: must be >= minPoles (20)"));
         post(STATOR, "{\"slots\":12,\"phases\":3,\"layers\":\"TRIPLE\",\"minPoles\":2,\"maxPoles\":10}")

@@ -1,5 +1,6 @@
 package coilwright.web.saved;
 
+import coilwright.web.OpenApiContract;
 import coilwright.web.TestApp;
 import io.restassured.response.Response;
 import org.apache.commons.csv.CSVFormat;
@@ -49,7 +50,7 @@ class SavedDesignApiTest {
         String id = r.path("designId");
         assertEquals("/d/" + id, r.path("links.design"));
         assertEquals("/d/" + id + "/r/" + r.path("revisionId"), r.path("links.revision"));
-        SavedContract.assertMatches(r, "/api/v1/designs", "POST");
+        OpenApiContract.assertMatches(r, "/api/v1/designs", "POST");
     }
 
     @Test
@@ -60,7 +61,7 @@ class SavedDesignApiTest {
         second.then().statusCode(200).body("created", equalTo(false)).body("$", not(hasKey("editToken")));
         assertEquals(first.path("designId"), second.<String>path("designId"));
         assertEquals(first.path("revisionId"), second.<String>path("revisionId"));
-        SavedContract.assertMatches(second, "/api/v1/designs", "POST");
+        OpenApiContract.assertMatches(second, "/api/v1/designs", "POST");
     }
 
     @Test
@@ -78,7 +79,7 @@ class SavedDesignApiTest {
                 .body("latest.design.alternator.turnsPerCoil", equalTo(40))
                 .body("latest.results.points", hasSize(21))
                 .body("latest.toolVersion", equalTo(APP.app().services().designs().toolVersion()));
-        SavedContract.assertMatches(r, "/api/v1/designs/{designId}", "GET");
+        OpenApiContract.assertMatches(r, "/api/v1/designs/{designId}", "GET");
     }
 
     @Test
@@ -91,7 +92,7 @@ class SavedDesignApiTest {
                 .body(SavedFixtures.document("Revised", "", 38)).post("/api/v1/designs/" + id + "/revisions");
         second.then().statusCode(201).body("designId", equalTo(id)).body("created", equalTo(true))
                 .body("$", not(hasKey("editToken")));
-        SavedContract.assertMatches(second, "/api/v1/designs/{designId}/revisions", "POST");
+        OpenApiContract.assertMatches(second, "/api/v1/designs/{designId}/revisions", "POST");
         Response third = given().header("X-Edit-Token", token).contentType("application/json")
                 .body(SavedFixtures.document("Revised", "", 40)).post("/api/v1/designs/" + id + "/revisions");
         third.then().statusCode(201);
@@ -102,7 +103,7 @@ class SavedDesignApiTest {
         old.then().statusCode(200).body("number", equalTo(1)).body("newerRevisionExists", equalTo(true))
                 .body("latestRevisionId", equalTo(third.path("revisionId")))
                 .body("design.alternator.turnsPerCoil", equalTo(36));
-        SavedContract.assertMatches(old, "/api/v1/revisions/{revisionId}", "GET");
+        OpenApiContract.assertMatches(old, "/api/v1/revisions/{revisionId}", "GET");
     }
 
     @Test
@@ -120,7 +121,7 @@ class SavedDesignApiTest {
             r.then().statusCode(403).contentType(startsWith("application/problem+json"))
                     .body("type", equalTo("/problems/forbidden"))
                     .body("detail", equalTo("The edit token does not allow changing design " + id + "; nothing was changed."));
-            SavedContract.assertMatches(r, "/api/v1/designs/{designId}/revisions", "POST");
+            OpenApiContract.assertMatches(r, "/api/v1/designs/{designId}/revisions", "POST");
         }
         given().get("/api/v1/designs/" + id).then().body("revisions", hasSize(1))
                 .body("latest.revisionId", equalTo(saved.path("revisionId"))).body("latest.notes", equalTo("Test notes."));
@@ -138,7 +139,7 @@ class SavedDesignApiTest {
         }
         Response r = given().get("/api/v1/designs/" + unknown);
         assertEquals("No saved design has the id " + unknown + ".", r.path("detail"));
-        SavedContract.assertMatches(r, "/api/v1/designs/{designId}", "GET");
+        OpenApiContract.assertMatches(r, "/api/v1/designs/{designId}", "GET");
         given().header("X-Edit-Token", "t").contentType("application/json").body(SavedFixtures.document("x"))
                 .post("/api/v1/designs/" + unknown + "/revisions").then().statusCode(404);
     }
@@ -150,7 +151,7 @@ class SavedDesignApiTest {
         r.then().statusCode(400).body("type", equalTo("/problems/invalid-input"))
                 .body("errors.field", hasItem("design.alternator.turnsPerCoil"))
                 .body("errors.field", hasItem("schemaVersion"));
-        SavedContract.assertMatches(r, "/api/v1/designs", "POST");
+        OpenApiContract.assertMatches(r, "/api/v1/designs", "POST");
         save("{\"title\": ").then().statusCode(400).body("type", equalTo("/problems/malformed-json"));
     }
 
@@ -159,7 +160,7 @@ class SavedDesignApiTest {
         String huge = SavedFixtures.document("Huge", "n".repeat(1_100_000), 36);
         Response r = save(huge);
         r.then().statusCode(413).contentType(startsWith("application/problem+json")).body("status", equalTo(413));
-        SavedContract.assertMatches(r, "/api/v1/designs", "POST");
+        OpenApiContract.assertMatches(r, "/api/v1/designs", "POST");
     }
 
     @Test
@@ -171,14 +172,14 @@ class SavedDesignApiTest {
                 .header("Content-Disposition", startsWith("attachment; filename=\"coilwright-"))
                 .body("schemaVersion", equalTo(1)).body("title", equalTo("Exported")).body("notes", equalTo("Round trip."))
                 .body("design.alternator.turnsPerCoil", equalTo(37));
-        SavedContract.assertMatches(export, "/api/v1/designs/{designId}/export", "GET");
+        OpenApiContract.assertMatches(export, "/api/v1/designs/{designId}/export", "GET");
         Response back = given().contentType("application/json").body(export.asString()).post("/api/v1/designs/import");
         back.then().statusCode(200).body("designId", equalTo(id)).body("created", equalTo(false));
         Response multipart = given().multiPart("file", "design.json",
                 SavedFixtures.document("Uploaded").getBytes(java.nio.charset.StandardCharsets.UTF_8), "application/json")
                 .post("/api/v1/designs/import");
         multipart.then().statusCode(201).body("editToken", matchesPattern("[A-Za-z0-9_-]{43}"));
-        SavedContract.assertMatches(multipart, "/api/v1/designs/import", "POST");
+        OpenApiContract.assertMatches(multipart, "/api/v1/designs/import", "POST");
         given().multiPart("file", "bad.json", SavedFixtures.document("Bad", "", 0).getBytes(), "application/json")
                 .post("/api/v1/designs/import").then().statusCode(400)
                 .body("errors.field", hasItem("design.alternator.turnsPerCoil"));
@@ -213,7 +214,7 @@ class SavedDesignApiTest {
         Response r = given().get("/api/v1/revisions/" + rev + "/recomputed");
         r.then().statusCode(200).body("differs", equalTo(false)).body("toolVersionDiffers", equalTo(false))
                 .body("changes", hasSize(0)).body("results.points", hasSize(21));
-        SavedContract.assertMatches(r, "/api/v1/revisions/{revisionId}/recomputed", "GET");
+        OpenApiContract.assertMatches(r, "/api/v1/revisions/{revisionId}/recomputed", "GET");
     }
 
     @Test
@@ -226,21 +227,21 @@ class SavedDesignApiTest {
                 .body("inputDifferences[1].a", equalTo("30")).body("inputDifferences[1].b", equalTo("45"))
                 .body("results.find { it.key == 'keLineRmsVPerRpm' }.differs", equalTo(true))
                 .body("results.find { it.key == 'maxSpeedRpm' }.differs", equalTo(false));
-        SavedContract.assertMatches(r, "/api/v1/compare", "GET");
+        OpenApiContract.assertMatches(r, "/api/v1/compare", "GET");
         double keA = r.path("results.find { it.key == 'keLineRmsVPerRpm' }.a");
         double keB = r.path("results.find { it.key == 'keLineRmsVPerRpm' }.b");
         assertEquals(45.0 / 30.0, keB / keA, 1e-9, "Ke is proportional to turns per coil");
         Response missing = given().queryParam("a", a).get("/api/v1/compare");
         missing.then().statusCode(400).body("errors[0].field", equalTo("b"));
-        SavedContract.assertMatches(missing, "/api/v1/compare", "GET");
+        OpenApiContract.assertMatches(missing, "/api/v1/compare", "GET");
         given().queryParam("a", a).queryParam("b", "AAAAAAAAAAAAAAAAAAAAAA").get("/api/v1/compare").then().statusCode(404);
     }
 
     @Test
     void the_contract_checker_rejects_a_body_that_breaks_the_saved_schemas() {
-        org.junit.jupiter.api.Assertions.assertThrows(AssertionError.class, () -> SavedContract.assertMatches(
+        org.junit.jupiter.api.Assertions.assertThrows(AssertionError.class, () -> OpenApiContract.assertMatches(
                 "/api/v1/designs", "POST", 201, "application/json", "{\"designId\":\"short\",\"revisionId\":\"x\"}"));
-        org.junit.jupiter.api.Assertions.assertThrows(AssertionError.class, () -> SavedContract.assertMatches(
+        org.junit.jupiter.api.Assertions.assertThrows(AssertionError.class, () -> OpenApiContract.assertMatches(
                 "/api/v1/designs/{designId}", "GET", 404, "application/problem+json", "{\"status\":404}"));
     }
 
