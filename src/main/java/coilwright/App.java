@@ -191,6 +191,10 @@ public final class App {
             System.err.println("coilwright: " + e.getMessage());
             System.exit(1);
             return;
+        } catch (io.javalin.util.JavalinBindException e) {
+            System.err.println("coilwright: port " + config.port() + " is in use; choose another with --port or COILWRIGHT_PORT");
+            System.exit(1);
+            return;
         }
         LOG.info("Coilwright listening on http://localhost:{}/ (data in {})", app.port(), config.dataDir().toAbsolutePath());
         Runtime.getRuntime().addShutdownHook(new Thread(app::stop, "coilwright-stop"));
