@@ -114,6 +114,21 @@ final class BridgeSweep {
         end = x;
     }
 
+    /** Branch currents at electrical angle theta = w t if it lies within this sweep (no pulse segments), else null. */
+    double[] stateAtAngle(double theta, double w) {
+        double t = theta / w;
+        for (int i = 0; i < segments.size(); i++) {
+            BridgeSegment s = segments.get(i);
+            double tau = t - s.t0;
+            if (tau >= 0 && tau <= durations.get(i) && pulses.get(i) == null) {
+                double[] x = new double[md.m];
+                s.currentsAt(tau, x);
+                return x;
+            }
+        }
+        return null;
+    }
+
     private void add(BridgeSegment seg, double d, BridgePulse pulse) {
         segments.add(seg);
         durations.add(d);
