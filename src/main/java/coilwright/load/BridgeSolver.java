@@ -195,12 +195,41 @@ public final class BridgeSolver {
                 }
                 if (norm(next.value) > 0.1 * norm(r.value)) {
                     jac = null;
+                } else if (jac != null && next.y != null) {
+                    broyden(jac, y, r.value, next.y, next.value);
                 }
                 r = next;
                 y = next.y;
             }
             throw new IllegalStateException("bridge solver: no periodic solution after " + MAX_NEWTON
                     + " Newton steps (residual " + norm(r.value) + " A)");
+        }
+    }
+
+    /**
+     * Broyden's rank-one update of the Jacobian after the step y0 -> y1 with residuals r0 -> r1 (Broyden, "A class
+     * of methods for solving nonlinear simultaneous equations", Math. Comp. 19, 1965): the chord becomes secant.
+     */
+    private static void broyden(double[][] jac, double[] y0, double[] r0, double[] y1, double[] r1) {
+        int n = y0.length;
+        double ss = 0;
+        double[] s = new double[n];
+        for (int i = 0; i < n; i++) {
+            s[i] = y1[i] - y0[i];
+            ss += s[i] * s[i];
+        }
+        if (!(ss > 0)) {
+            return;
+        }
+        for (int i = 0; i < n; i++) {
+            double js = 0;
+            for (int j = 0; j < n; j++) {
+                js += jac[i][j] * s[j];
+            }
+            double u = (r1[i] - r0[i] - js) / ss;
+            for (int j = 0; j < n; j++) {
+                jac[i][j] += u * s[j];
+            }
         }
     }
 

@@ -9,6 +9,8 @@ package coilwright.load;
  */
 final class BridgeWarmStart {
     private static final double MAX_EXTRAPOLATION = 1.5;
+    /** Nearest an anchor may come to either end of its segment, as a fraction of the segment. */
+    private static final double ANCHOR_MARGIN = 0.2;
     private BridgeSweep last;
     private double lastW;
     private BridgeSweep before;
@@ -36,10 +38,20 @@ final class BridgeWarmStart {
         jacobian = jac;
     }
 
-    /** Electrical angle of the anchor for the next solve: the middle of the last solution's busiest segment. */
+    /**
+     * Electrical angle of the anchor for the next solve. The last anchor is kept while it stays well inside the
+     * last solution's busiest segment (so the chord Jacobian, which belongs to that anchor, stays apt and both
+     * remembered solutions start there); otherwise the middle of that segment.
+     */
     double anchorRad() {
         int best = BridgeSolver.busiest(last);
-        return lastW * (last.segments.get(best).t0 + last.durations.get(best) / 2);
+        double t0 = last.segments.get(best).t0;
+        double d = last.durations.get(best);
+        double keptT = last.t0;
+        if (keptT >= t0 + ANCHOR_MARGIN * d && keptT <= t0 + (1 - ANCHOR_MARGIN) * d) {
+            return lastW * keptT;
+        }
+        return lastW * (t0 + d / 2);
     }
 
     /**
