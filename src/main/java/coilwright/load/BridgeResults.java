@@ -75,8 +75,9 @@ final class BridgeResults {
         ConductionMode mode = offTime > 0 ? ConductionMode.DISCONTINUOUS
                 : three ? ConductionMode.CONTINUOUS_WITH_OVERLAP : ConductionMode.CONTINUOUS;
         double perDiodeFactor = three ? 1 : 0.5;
+        double linePeak = peak(md, sw, false);
         return new BridgeOperatingPoint(mode, idcAvg, Math.sqrt(idcRms2), vb, vb + c.dcResistanceOhm() * idcAvg,
-                Math.sqrt(i2 / md.m), peak(md, sw, false), three ? peak(md, sw, true) : peak(md, sw, false),
+                Math.sqrt(i2 / md.m), linePeak, three ? peak(md, sw, true) : linePeak,
                 Math.sqrt(Math.max(vll2, 0) / (pairs(md.m).size() * ts)), emfPower / ts, vb * idcAvg,
                 md.rWinding * i2, md.rCable * i2, c.dcCableResistanceOhm() * idcRms2,
                 c.batteryInternalResistanceOhm() * idcRms2, 2 * c.diodeDropV() * idcAvg,
@@ -130,9 +131,24 @@ final class BridgeResults {
                 candValue[nc + f] = -1;
                 candSeg[nc + f] = i;
             }
+            // basis advanced by recurrence between samples: the samples only choose where to refine exactly
+            double h = d / samples;
+            double cStep = Math.cos(md.w * h);
+            double sStep = Math.sin(md.w * h);
+            double e1Step = Math.exp(s.lambda1 * h);
+            double e2Step = Math.exp(s.lambda2 * h);
+            s.basis(0, bs);
             for (int j = 0; j <= samples; j++) {
                 double tau = d * j / samples;
-                s.basis(tau, bs);
+                if (j == samples) {
+                    s.basis(tau, bs);
+                } else if (j > 0) {
+                    double c = bs[0] * cStep - bs[1] * sStep;
+                    bs[1] = bs[1] * cStep + bs[0] * sStep;
+                    bs[0] = c;
+                    bs[3] *= e1Step;
+                    bs[4] *= e2Step;
+                }
                 for (int f = 0; f < nf; f++) {
                     double v = Math.abs(BridgeSegment.dot(candFn[first + f], bs));
                     if (v > candValue[first + f]) {
