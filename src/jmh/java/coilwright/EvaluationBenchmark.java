@@ -74,4 +74,20 @@ public class EvaluationBenchmark {
         }
         return sum;
     }
+
+    /** The same 200 points on one warm-started sweep in speed order (the path evaluate_200_points takes). */
+    @Benchmark
+    public double solve_200_points_warm_sweep() {
+        coilwright.load.LoadSolver.Sweep sweep = coilwright.load.LoadSolver.sweep(
+                new coilwright.load.AcSource(alternator.spec().winding().phases(), alternator.spec().connection(), 0, 1,
+                        alternator.phaseResistanceHotOhm(), alternator.phaseInductanceH()), request.load());
+        double sum = 0;
+        for (int i = 0; i < request.speedRange().points(); i++) {
+            double speed = request.speedRange().speedRpm(i);
+            if (speed > 0) {
+                sum += sweep.solveAt(alternator.emfPhaseRmsV(speed), alternator.frequencyHz(speed)).dcCurrentA();
+            }
+        }
+        return sum;
+    }
 }

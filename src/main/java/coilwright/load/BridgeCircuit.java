@@ -24,22 +24,40 @@ public record BridgeCircuit(BridgeType type, double emfPhaseRmsV, double frequen
                             double acCableResistanceOhm, double inductanceH, double batteryVoltageV,
                             double diodeDropV, double dcCableResistanceOhm, double batteryInternalResistanceOhm) {
     public BridgeCircuit {
-        Checks c = new Checks();
-        c.present("type", type)
-                .range("emfPhaseRmsV", emfPhaseRmsV, 0, 1e6)
-                .rangeExclusiveMin("frequencyHz", frequencyHz, 0, 1e5)
-                .range("windingResistanceOhm", windingResistanceOhm, 0, 1e4)
-                .range("acCableResistanceOhm", acCableResistanceOhm, 0, 1e4)
-                .rangeExclusiveMin("inductanceH", inductanceH, 0, 100)
-                .rangeExclusiveMin("batteryVoltageV", batteryVoltageV, 0, 2000)
-                .range("diodeDropV", diodeDropV, 0, 5)
-                .range("dcCableResistanceOhm", dcCableResistanceOhm, 0, 1e4)
-                .range("batteryInternalResistanceOhm", batteryInternalResistanceOhm, 0, 100);
-        if (!c.hasErrors()) {
-            c.require(windingResistanceOhm + acCableResistanceOhm > 0, "windingResistanceOhm",
-                    windingResistanceOhm, "winding plus AC cable resistance must be > 0", "> 0 with the cable");
+        if (!plainlyValid(type, emfPhaseRmsV, frequencyHz, windingResistanceOhm, acCableResistanceOhm, inductanceH,
+                batteryVoltageV, diodeDropV, dcCableResistanceOhm, batteryInternalResistanceOhm)) {
+            Checks c = new Checks();
+            c.present("type", type)
+                    .range("emfPhaseRmsV", emfPhaseRmsV, 0, 1e6)
+                    .rangeExclusiveMin("frequencyHz", frequencyHz, 0, 1e5)
+                    .range("windingResistanceOhm", windingResistanceOhm, 0, 1e4)
+                    .range("acCableResistanceOhm", acCableResistanceOhm, 0, 1e4)
+                    .rangeExclusiveMin("inductanceH", inductanceH, 0, 100)
+                    .rangeExclusiveMin("batteryVoltageV", batteryVoltageV, 0, 2000)
+                    .range("diodeDropV", diodeDropV, 0, 5)
+                    .range("dcCableResistanceOhm", dcCableResistanceOhm, 0, 1e4)
+                    .range("batteryInternalResistanceOhm", batteryInternalResistanceOhm, 0, 100);
+            if (!c.hasErrors()) {
+                c.require(windingResistanceOhm + acCableResistanceOhm > 0, "windingResistanceOhm",
+                        windingResistanceOhm, "winding plus AC cable resistance must be > 0", "> 0 with the cable");
+            }
+            c.throwIfAny();
         }
-        c.throwIfAny();
+    }
+
+    /**
+     * The same rules as the checks above, as plain comparisons (false for NaN): a sweep builds one circuit per
+     * speed, and the checks format their messages eagerly, so they run only when something is wrong.
+     */
+    private static boolean plainlyValid(BridgeType type, double emf, double f, double rw, double rc, double l,
+                                        double vb, double vd, double rdc, double rb) {
+        return type != null && in(emf, 0, 1e6) && f > 0 && f <= 1e5 && in(rw, 0, 1e4) && in(rc, 0, 1e4)
+                && l > 0 && l <= 100 && vb > 0 && vb <= 2000 && in(vd, 0, 5) && in(rdc, 0, 1e4) && in(rb, 0, 100)
+                && rw + rc > 0;
+    }
+
+    private static boolean in(double v, double min, double max) {
+        return v >= min && v <= max;
     }
 
     /** Peak line-to-line EMF (three-phase) or peak winding EMF (single-phase), V. */

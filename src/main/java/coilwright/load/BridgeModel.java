@@ -150,6 +150,18 @@ final class BridgeModel {
         }
     }
 
+    /** The symmetry map itself: the state one interval later, x(t + sweepS) = S x(t) (inverse of unshift). */
+    void shift(double[] x, double[] out) {
+        if (m == 3) {
+            out[0] = -x[1];
+            out[1] = -x[2];
+            out[2] = -x[0];
+        } else {
+            out[0] = -x[0];
+            out[1] = -x[1];
+        }
+    }
+
     /** Scale of currents: the short-circuit branch current amplitude, A. */
     double currentScaleA() {
         return emfPeakV / Math.hypot(r, w * l);

@@ -1,18 +1,23 @@
 package coilwright.load;
 
+import org.apache.commons.math3.analysis.solvers.BrentSolver;
 import org.apache.commons.math3.optim.MaxEval;
 import org.apache.commons.math3.optim.nonlinear.scalar.GoalType;
 import org.apache.commons.math3.optim.univariate.BrentOptimizer;
 import org.apache.commons.math3.optim.univariate.SearchInterval;
 import org.apache.commons.math3.optim.univariate.UnivariateObjectiveFunction;
 
-import java.util.ArrayList;
 import java.util.List;
 
 /** Period averages of a periodic bridge solution, integrated exactly segment by segment. */
 final class BridgeResults {
     /** Sampling step for peak search before refinement, electrical radians. */
     private static final double PEAK_SAMPLE_RAD = Math.toRadians(2.0);
+    /**
+     * Segment maxima sampled within this fraction of the best sample are refined: a 2-degree grid can misjudge a
+     * smooth maximum by about (1 degree)^2 / 2 = 1.5e-4 of it.
+     */
+    private static final double PEAK_MARGIN = 1e-3;
 
     private BridgeResults() {
     }
@@ -70,8 +75,9 @@ final class BridgeResults {
         ConductionMode mode = offTime > 0 ? ConductionMode.DISCONTINUOUS
                 : three ? ConductionMode.CONTINUOUS_WITH_OVERLAP : ConductionMode.CONTINUOUS;
         double perDiodeFactor = three ? 1 : 0.5;
+        double linePeak = peak(md, sw, false);
         return new BridgeOperatingPoint(mode, idcAvg, Math.sqrt(idcRms2), vb, vb + c.dcResistanceOhm() * idcAvg,
-                Math.sqrt(i2 / md.m), peak(md, sw, false), three ? peak(md, sw, true) : peak(md, sw, false),
+                Math.sqrt(i2 / md.m), linePeak, three ? peak(md, sw, true) : linePeak,
                 Math.sqrt(Math.max(vll2, 0) / (pairs(md.m).size() * ts)), emfPower / ts, vb * idcAvg,
                 md.rWinding * i2, md.rCable * i2, c.dcCableResistanceOhm() * idcRms2,
                 c.batteryInternalResistanceOhm() * idcRms2, 2 * c.diodeDropV() * idcAvg,
@@ -90,14 +96,22 @@ final class BridgeResults {
         return r;
     }
 
-    /** Peak of |i_k| (line currents) or of |i_j - i_k|/3 (delta winding currents) over the sweep. */
+    /**
+     * Peak of |i_k| (line currents) or of |i_j - i_k|/3 (delta winding currents) over the sweep. Every waveform is
+     * sampled every {@link #PEAK_SAMPLE_RAD} within each segment (ends included, where kinks are); the best sample
+     * of each segment and waveform that comes within {@link #PEAK_MARGIN} of the overall best is refined, so the
+     * answer does not depend on where the sweep happens to start.
+     */
     private static double peak(BridgeModel md, BridgeSweep sw, boolean delta) {
         double best = 0;
-        BridgeSegment bestSeg = null;
-        double[] bestFn = null;
-        double bestTau = 0;
-        double bestD = 0;
         double[] bs = new double[BridgeSegment.NB];
+        int nf = delta ? (md.m == 3 ? 3 : 1) : md.m;
+        int count = sw.segments.size() * nf;
+        double[] candValue = new double[count];
+        double[] candTau = new double[count];
+        double[][] candFn = new double[count][];
+        int[] candSeg = new int[count];
+        int nc = 0;
         for (int i = 0; i < sw.segments.size(); i++) {
             BridgeSegment s = sw.segments.get(i);
             double d = sw.durations.get(i);
@@ -110,51 +124,94 @@ final class BridgeResults {
                 best = Math.max(best, delta && md.m == 3 ? 2 * pulse.peakA / 3 : pulse.peakA);
                 continue;
             }
-            List<double[]> fns = new ArrayList<>();
-            if (delta) {
-                for (int[] p : pairs(md.m)) {
-                    double[] f = minus(s.current[p[0]], s.current[p[1]]);
-                    for (int j = 0; j < f.length; j++) {
-                        f[j] /= 3;
-                    }
-                    fns.add(f);
-                }
-            } else {
-                fns.addAll(List.of(s.current));
-            }
             int samples = Math.max(2, (int) Math.ceil(d * md.w / PEAK_SAMPLE_RAD));
+            int first = nc;
+            for (int f = 0; f < nf; f++) {
+                candFn[nc + f] = waveform(md, s, delta, f);
+                candValue[nc + f] = -1;
+                candSeg[nc + f] = i;
+            }
+            // basis advanced by recurrence between samples: the samples only choose where to refine exactly
+            double h = d / samples;
+            double cStep = Math.cos(md.w * h);
+            double sStep = Math.sin(md.w * h);
+            double e1Step = Math.exp(s.lambda1 * h);
+            double e2Step = Math.exp(s.lambda2 * h);
+            s.basis(0, bs);
             for (int j = 0; j <= samples; j++) {
                 double tau = d * j / samples;
-                s.basis(tau, bs);
-                for (double[] f : fns) {
-                    double v = Math.abs(BridgeSegment.dot(f, bs));
-                    if (v > best) {
-                        best = v;
-                        bestSeg = s;
-                        bestFn = f;
-                        bestTau = tau;
-                        bestD = d;
+                if (j == samples) {
+                    s.basis(tau, bs);
+                } else if (j > 0) {
+                    double c = bs[0] * cStep - bs[1] * sStep;
+                    bs[1] = bs[1] * cStep + bs[0] * sStep;
+                    bs[0] = c;
+                    bs[3] *= e1Step;
+                    bs[4] *= e2Step;
+                }
+                for (int f = 0; f < nf; f++) {
+                    double v = Math.abs(BridgeSegment.dot(candFn[first + f], bs));
+                    if (v > candValue[first + f]) {
+                        candValue[first + f] = v;
+                        candTau[first + f] = tau;
                     }
                 }
             }
+            nc += nf;
         }
-        if (bestSeg == null) {
-            return best;
+        double sampled = best;
+        for (int c = 0; c < nc; c++) {
+            sampled = Math.max(sampled, candValue[c]);
         }
+        best = sampled;
+        for (int c = 0; c < nc; c++) {
+            if (candValue[c] >= (1 - PEAK_MARGIN) * sampled && candValue[c] > 0) {
+                best = Math.max(best, refine(md, sw.segments.get(candSeg[c]), sw.durations.get(candSeg[c]),
+                        candFn[c], candTau[c]));
+            }
+        }
+        return best;
+    }
+
+    /** Coefficients of waveform f of a segment: line current f, or (i_p - i_q)/3 for the f-th phase pair. */
+    private static double[] waveform(BridgeModel md, BridgeSegment s, boolean delta, int f) {
+        if (!delta) {
+            return s.current[f];
+        }
+        int[] pair = pairs(md.m).get(f);
+        double[] out = minus(s.current[pair[0]], s.current[pair[1]]);
+        for (int j = 0; j < out.length; j++) {
+            out[j] /= 3;
+        }
+        return out;
+    }
+
+    /** The maximum of |fn| within one sample step of bestTau in a segment of length d. */
+    private static double refine(BridgeModel md, BridgeSegment seg, double d, double[] fn, double bestTau) {
         double step = PEAK_SAMPLE_RAD / md.w;
         double lo = Math.max(0, bestTau - step);
-        double hi = Math.min(bestD, bestTau + step);
-        if (hi <= lo) {
-            return best;
-        }
-        BridgeSegment seg = bestSeg;
-        double[] fn = bestFn;
+        double hi = Math.min(d, bestTau + step);
         double[] b2 = new double[BridgeSegment.NB];
+        double atBest = Math.abs(value(seg, fn, bestTau, b2));
+        if (hi <= lo) {
+            return atBest;
+        }
+        // the peak is where the derivative changes sign from + to -; its root is cheaper to locate than the maximum
+        double sgn = Math.signum(value(seg, fn, bestTau, b2));
+        double w = md.w;
+        double[] slope = {sgn * w * fn[1], -sgn * w * fn[0], 0, sgn * seg.lambda1 * fn[3], sgn * seg.lambda2 * fn[4]};
+        if (value(seg, slope, lo, b2) > 0 && value(seg, slope, hi, b2) < 0) {
+            double root = new BrentSolver(1e-15, 1e-14 * step).solve(200, tau -> value(seg, slope, tau, b2), lo, hi);
+            return Math.max(atBest, Math.abs(value(seg, fn, root, b2)));
+        }
         double refined = new BrentOptimizer(1e-12, 1e-14 * step).optimize(new MaxEval(200),
-                new UnivariateObjectiveFunction(tau -> {
-                    seg.basis(tau, b2);
-                    return Math.abs(BridgeSegment.dot(fn, b2));
-                }), GoalType.MAXIMIZE, new SearchInterval(lo, hi, Math.min(hi, Math.max(lo, bestTau)))).getValue();
-        return Math.max(best, refined);
+                new UnivariateObjectiveFunction(tau -> Math.abs(value(seg, fn, tau, b2))), GoalType.MAXIMIZE,
+                new SearchInterval(lo, hi, Math.min(hi, Math.max(lo, bestTau)))).getValue();
+        return Math.max(atBest, refined);
+    }
+
+    private static double value(BridgeSegment seg, double[] fn, double tau, double[] b) {
+        seg.basis(tau, b);
+        return BridgeSegment.dot(fn, b);
     }
 }

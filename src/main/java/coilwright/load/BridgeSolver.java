@@ -34,14 +34,47 @@ public final class BridgeSolver {
      * @throws IllegalStateException if the periodic solution cannot be found (not expected for valid input)
      */
     public static BridgeOperatingPoint solve(BridgeCircuit circuit) {
-        if (BridgeModel.windowHalfRad(circuit.peakDrivingEmfV(), circuit.thresholdV()) < BridgeModel.MIN_WINDOW_RAD) {
+        return solve(circuit, null);
+    }
+
+    /**
+     * The solver's own zero test, in closed form: false exactly when {@link #solve(BridgeCircuit)} returns zero
+     * currents because the conduction window is narrower than {@link BridgeModel#MIN_WINDOW_RAD}.
+     *
+     * @param circuit the circuit (validated)
+     * @return true when the bridge conducts
+     */
+    public static boolean conducts(BridgeCircuit circuit) {
+        return BridgeModel.windowHalfRad(circuit.peakDrivingEmfV(), circuit.thresholdV()) >= BridgeModel.MIN_WINDOW_RAD;
+    }
+
+    /**
+     * Solves one operating point starting from what a neighbouring point left in {@code warm} (null: a cold
+     * start), and leaves this point's solution there for the next one. The answer is the same periodic solution
+     * to the same tolerance; only the work to reach it changes.
+     */
+    static BridgeOperatingPoint solve(BridgeCircuit circuit, BridgeWarmStart warm) {
+        if (!conducts(circuit)) {
+            if (warm != null) {
+                warm.forget();
+            }
             return BridgeResults.belowCutIn(circuit);
         }
         BridgeModel md = new BridgeModel(circuit);
-        return BridgeResults.assemble(circuit, md, periodic(md));
+        return BridgeResults.assemble(circuit, md, periodic(md, warm));
     }
 
     static BridgeSweep periodic(BridgeModel md) {
+        return periodic(md, null);
+    }
+
+    private static BridgeSweep periodic(BridgeModel md, BridgeWarmStart warm) {
+        if (warm != null && warm.ready()) {
+            BridgeSweep fast = warmNewton(md, warm);
+            if (fast != null) {
+                return fast;
+            }
+        }
         int m = md.m;
         BridgeSweep sw = new BridgeSweep(md, 0, new double[m]);
         for (int it = 0; it < FIXED_POINT_SWEEPS; it++) {
@@ -50,6 +83,9 @@ public final class BridgeSolver {
                 BridgeSegment s = sw.segments.get(off);
                 BridgeSweep fromZero = new BridgeSweep(md, s.t0 + sw.durations.get(off) / 2, new double[m]);
                 if (endsOff(fromZero)) {
+                    if (warm != null) {
+                        warm.forget();
+                    }
                     return fromZero;
                 }
                 sw = fromZero;
@@ -58,66 +94,143 @@ public final class BridgeSolver {
             md.unshift(sw.end, next);
             sw = new BridgeSweep(md, sw.t0, next);
         }
-        return newton(md, sw);
+        int best = busiest(sw);
+        BridgeSegment anchor = sw.segments.get(best);
+        double half = sw.durations.get(best) / 2;
+        double[] xa = new double[md.m];
+        anchor.currentsAt(half, xa);
+        Newton nt = new Newton(md, anchor.t0 + half, java.util.Arrays.copyOf(xa, md.m - 1), null);
+        BridgeSweep result = nt.solve();
+        if (warm != null) {
+            if (longestOff(result) < 0) {
+                warm.remember(result, md.w, nt.jac);
+            } else {
+                warm.forget();
+            }
+        }
+        return result;
     }
 
-    private static BridgeSweep newton(BridgeModel md, BridgeSweep guess) {
+    /** Newton from the predicted state at the last solution's anchor angle; null when that does not work out. */
+    private static BridgeSweep warmNewton(BridgeModel md, BridgeWarmStart warm) {
+        double anchorRad = warm.anchorRad();
+        double[] y = warm.predict(anchorRad, md.w, md.m - 1);
+        if (y == null) {
+            return null;
+        }
+        try {
+            Newton nt = new Newton(md, anchorRad / md.w, y, warm.jacobian);
+            BridgeSweep result = nt.solve();
+            if (longestOff(result) >= 0) {
+                return null;
+            }
+            warm.remember(result, md.w, nt.jac);
+            return result;
+        } catch (IllegalStateException e) {
+            return null;
+        }
+    }
+
+    /** Index of the segment with the most conducting diodes (the longest among equals): where the map is smooth. */
+    static int busiest(BridgeSweep sw) {
         int best = 0;
-        for (int i = 1; i < guess.segments.size(); i++) {
-            int ci = guess.segments.get(i).conducting();
-            int cb = guess.segments.get(best).conducting();
-            if (ci > cb || ci == cb && guess.durations.get(i) > guess.durations.get(best)) {
+        for (int i = 1; i < sw.segments.size(); i++) {
+            int ci = sw.segments.get(i).conducting();
+            int cb = sw.segments.get(best).conducting();
+            if (ci > cb || ci == cb && sw.durations.get(i) > sw.durations.get(best)) {
                 best = i;
             }
         }
-        BridgeSegment anchor = guess.segments.get(best);
-        double half = guess.durations.get(best) / 2;
-        double ta = anchor.t0 + half;
-        double[] xa = new double[md.m];
-        anchor.currentsAt(half, xa);
-        int n = md.m - 1;
-        double[] y = java.util.Arrays.copyOf(xa, n);
-        double scale = md.currentScaleA();
-        Residual r = new Residual(md, ta, y);
-        double[][] jac = null;
-        for (int it = 0; it < MAX_NEWTON; it++) {
-            double size = Math.max(norm(y), 1e-3 * scale);
-            if (norm(r.value) <= NEWTON_TOLERANCE * size
-                    || it >= MAX_NEWTON / 2 && norm(r.value) <= ACCEPT_TOLERANCE * size) {
-                return r.sweep;
-            }
-            if (jac == null) {
-                jac = jacobian(md, ta, y, r, size);
-            }
-            double[] step = solveSmall(jac, r.value);
-            Residual next = null;
-            for (double lambda = 1; lambda > 1e-3; lambda /= 2) {
-                double[] yt = y.clone();
-                for (int i = 0; i < n; i++) {
-                    yt[i] -= lambda * step[i];
-                }
-                Residual trial = new Residual(md, ta, yt);
-                if (norm(trial.value) < norm(r.value)) {
-                    next = trial;
-                    break;
-                }
-            }
-            if (next == null) {
-                if (norm(r.value) <= ACCEPT_TOLERANCE * size) {
+        return best;
+    }
+
+    /** Newton's method on the residual at anchor time ta, with a chord Jacobian kept while it converges fast. */
+    private static final class Newton {
+        private final BridgeModel md;
+        private final double ta;
+        private final double[] y0;
+        double[][] jac;
+
+        Newton(BridgeModel md, double ta, double[] y0, double[][] jac) {
+            this.md = md;
+            this.ta = ta;
+            this.y0 = y0;
+            this.jac = jac;
+        }
+
+        BridgeSweep solve() {
+            int n = md.m - 1;
+            double[] y = y0;
+            double scale = md.currentScaleA();
+            Residual r = new Residual(md, ta, y);
+            for (int it = 0; it < MAX_NEWTON; it++) {
+                double size = Math.max(norm(y), 1e-3 * scale);
+                if (norm(r.value) <= NEWTON_TOLERANCE * size
+                        || it >= MAX_NEWTON / 2 && norm(r.value) <= ACCEPT_TOLERANCE * size) {
                     return r.sweep;
                 }
-                double[] fp = new double[md.m];
-                md.unshift(r.sweep.end, fp);
-                next = new Residual(md, ta, java.util.Arrays.copyOf(fp, n));
+                if (jac == null) {
+                    jac = jacobian(md, ta, y, r, size);
+                }
+                double[] step = solveSmall(jac, r.value);
+                Residual next = null;
+                for (double lambda = 1; lambda > 1e-3; lambda /= 2) {
+                    double[] yt = y.clone();
+                    for (int i = 0; i < n; i++) {
+                        yt[i] -= lambda * step[i];
+                    }
+                    Residual trial = new Residual(md, ta, yt);
+                    if (norm(trial.value) < norm(r.value)) {
+                        next = trial;
+                        break;
+                    }
+                }
+                if (next == null) {
+                    if (norm(r.value) <= ACCEPT_TOLERANCE * size) {
+                        return r.sweep;
+                    }
+                    double[] fp = new double[md.m];
+                    md.unshift(r.sweep.end, fp);
+                    next = new Residual(md, ta, java.util.Arrays.copyOf(fp, n));
+                }
+                if (norm(next.value) > 0.1 * norm(r.value)) {
+                    jac = null;
+                } else if (jac != null && next.y != null) {
+                    broyden(jac, y, r.value, next.y, next.value);
+                }
+                r = next;
+                y = next.y;
             }
-            if (norm(next.value) > 0.1 * norm(r.value)) {
-                jac = null;
-            }
-            r = next;
-            y = next.y;
+            throw new IllegalStateException("bridge solver: no periodic solution after " + MAX_NEWTON
+                    + " Newton steps (residual " + norm(r.value) + " A)");
         }
-        throw new IllegalStateException("bridge solver: no periodic solution after " + MAX_NEWTON
-                + " Newton steps (residual " + norm(r.value) + " A)");
+    }
+
+    /**
+     * Broyden's rank-one update of the Jacobian after the step y0 -> y1 with residuals r0 -> r1 (Broyden, "A class
+     * of methods for solving nonlinear simultaneous equations", Math. Comp. 19, 1965): the chord becomes secant.
+     */
+    private static void broyden(double[][] jac, double[] y0, double[] r0, double[] y1, double[] r1) {
+        int n = y0.length;
+        double ss = 0;
+        double[] s = new double[n];
+        for (int i = 0; i < n; i++) {
+            s[i] = y1[i] - y0[i];
+            ss += s[i] * s[i];
+        }
+        if (!(ss > 0)) {
+            return;
+        }
+        for (int i = 0; i < n; i++) {
+            double js = 0;
+            for (int j = 0; j < n; j++) {
+                js += jac[i][j] * s[j];
+            }
+            double u = (r1[i] - r0[i] - js) / ss;
+            for (int j = 0; j < n; j++) {
+                jac[i][j] += u * s[j];
+            }
+        }
     }
 
     /** Forward-difference Jacobian of the residual (reused while it keeps converging fast: a chord method). */

@@ -114,6 +114,42 @@ final class BridgeSweep {
         end = x;
     }
 
+    /**
+     * Branch currents at electrical angle theta = w t of this (periodic) solution, else null where only a pulse
+     * segment covers it. Angles outside the sweep are brought into it with the symmetry x(t + T_s) = S x(t).
+     */
+    double[] stateAtAngle(double theta, double w) {
+        double t = theta / w;
+        double span = md.sweepS;
+        int shifts = (int) Math.floor((t - t0) / span);
+        t -= shifts * span;
+        double[] x = null;
+        for (int i = 0; i < segments.size() && x == null; i++) {
+            BridgeSegment s = segments.get(i);
+            double tau = Math.min(Math.max(t - s.t0, 0), durations.get(i));
+            if (t >= s.t0 && (t <= s.t0 + durations.get(i) || i == segments.size() - 1)) {
+                if (pulses.get(i) != null) {
+                    return null;
+                }
+                x = new double[md.m];
+                s.currentsAt(tau, x);
+            }
+        }
+        if (x == null) {
+            return null;
+        }
+        double[] tmp = new double[md.m];
+        for (; shifts > 0; shifts--) {
+            md.shift(x, tmp);
+            System.arraycopy(tmp, 0, x, 0, md.m);
+        }
+        for (; shifts < 0; shifts++) {
+            md.unshift(x, tmp);
+            System.arraycopy(tmp, 0, x, 0, md.m);
+        }
+        return x;
+    }
+
     private void add(BridgeSegment seg, double d, BridgePulse pulse) {
         segments.add(seg);
         durations.add(d);

@@ -26,6 +26,13 @@ public final class AlternatorEvaluator {
 
     /** Bisection steps for the solved cut-in: 2^-50 of the bracket is far below any meaningful speed. */
     private static final int CUT_IN_BISECTION_STEPS = 50;
+    /**
+     * Relative half-width of the bracket around the closed-form cut-in: the solver conducts from
+     * 1 / cos(MIN_WINDOW_RAD) = 1 + 5e-7 times it, well inside.
+     */
+    private static final double CUT_IN_BRACKET = 1e-3;
+    /** Enough halvings of that bracket to reach adjacent doubles. */
+    private static final int MAX_ZERO_TEST_STEPS = 80;
 
     private AlternatorEvaluator() {
     }
@@ -42,13 +49,15 @@ public final class AlternatorEvaluator {
     /** Evaluates an already-built alternator (for callers that vary only the load or speeds). */
     public static AlternatorEvaluation evaluate(Alternator alt, EvaluationRequest req) {
         Load load = req.load();
+        // one warm-started sweep in speed order; each point agrees with point(...) to the solver's tolerance
+        LoadSolver.Sweep sweep = sweep(alt, load);
         List<SpeedPoint> points = new ArrayList<>(req.speedRange().points());
         for (int i = 0; i < req.speedRange().points(); i++) {
-            points.add(point(alt, load, req.speedRange().speedRpm(i)));
+            points.add(point(alt, sweep, req.speedRange().speedRpm(i)));
         }
-        SpeedPoint rated = point(alt, load, req.effectiveRatedSpeedRpm());
+        SpeedPoint rated = point(alt, sweep, req.effectiveRatedSpeedRpm());
         double cutIn = closedFormCutInRpm(alt, load);
-        double cutInSolved = load instanceof BatteryLoad ? solvedCutInRpm(alt, load, cutIn) : 0;
+        double cutInSolved = load instanceof BatteryLoad ? solvedCutInRpm(alt, load, sweep, cutIn) : 0;
         double pathAreaM2 = req.alternator().wire().conductorCopperAreaM2();
         CurrentDensity density = CurrentDensity.check(rated.phaseCurrentRmsA() / req.alternator().winding().parallelPaths(),
                 pathAreaM2, req.alternator().cooling());
@@ -83,7 +92,30 @@ public final class AlternatorEvaluator {
         }
         AcSource src = new AcSource(alt.spec().winding().phases(), alt.spec().connection(), ePh, f,
                 alt.phaseResistanceHotOhm(), alt.phaseInductanceH());
-        OperatingPoint op = LoadSolver.solve(src, load);
+        return speedPoint(alt, speedRpm, f, ePh, eLine, LoadSolver.solve(src, load));
+    }
+
+    /** A warm-started sweep over speeds for this alternator and load. */
+    private static LoadSolver.Sweep sweep(Alternator alt, Load load) {
+        // the reference source only carries the speed-independent constants
+        AcSource reference = new AcSource(alt.spec().winding().phases(), alt.spec().connection(), 0, 1,
+                alt.phaseResistanceHotOhm(), alt.phaseInductanceH());
+        return LoadSolver.sweep(reference, load);
+    }
+
+    /** {@link #point(Alternator, Load, double)} solved on a sweep. */
+    private static SpeedPoint point(Alternator alt, LoadSolver.Sweep sweep, double speedRpm) {
+        double f = alt.frequencyHz(speedRpm);
+        double ePh = alt.emfPhaseRmsV(speedRpm);
+        double eLine = alt.emfLineRmsV(speedRpm);
+        if (speedRpm <= 0) {
+            return new SpeedPoint(0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, ConductionMode.ZERO_BELOW_CUT_IN);
+        }
+        return speedPoint(alt, speedRpm, f, ePh, eLine, sweep.solveAt(ePh, f));
+    }
+
+    private static SpeedPoint speedPoint(Alternator alt, double speedRpm, double f, double ePh, double eLine,
+                                         OperatingPoint op) {
         double omega = speedRpm * 2 * Math.PI / 60;
         double shaftW = op.powerFromEmfW();
         double pathCurrent = op.phaseCurrentRmsA() / alt.spec().winding().parallelPaths();
@@ -103,6 +135,38 @@ public final class AlternatorEvaluator {
         // the bridge sees the line-to-line EMF of a three-phase machine, the winding EMF of a single-phase one
         double ke = type == BridgeType.THREE_PHASE_BRIDGE ? alt.keLineRmsVPerRpm() : alt.kePhaseRmsVPerRpm();
         return CutIn.speedRpm(ke, b.battery().voltageV(), b.rectifier().forwardDropV(), type);
+    }
+
+    /**
+     * The lowest speed at which the solved operating point carries current, rpm. The solver's zero test is closed
+     * form, so the bracket around the closed-form cut-in is bisected on it down to adjacent doubles; the answer is
+     * then confirmed by full solves on both sides (current above, none below), and the plain bisection on full
+     * solves is used whenever that confirmation fails.
+     */
+    static double solvedCutInRpm(Alternator alt, Load load, LoadSolver.Sweep sweep, double guessRpm) {
+        double lo = (1 - CUT_IN_BRACKET) * guessRpm;
+        double hi = (1 + CUT_IN_BRACKET) * guessRpm;
+        if (lo > 0 && !conducts(alt, sweep, lo) && conducts(alt, sweep, hi)) {
+            for (int k = 0; k < MAX_ZERO_TEST_STEPS; k++) {
+                double mid = 0.5 * (lo + hi);
+                if (mid <= lo || mid >= hi) {
+                    break;
+                }
+                if (conducts(alt, sweep, mid)) {
+                    hi = mid;
+                } else {
+                    lo = mid;
+                }
+            }
+            if (point(alt, sweep, hi).dcCurrentA() > 0 && point(alt, sweep, lo).dcCurrentA() <= 0) {
+                return hi;
+            }
+        }
+        return solvedCutInRpm(alt, load, guessRpm);
+    }
+
+    private static boolean conducts(Alternator alt, LoadSolver.Sweep sweep, double speedRpm) {
+        return sweep.conductsAt(alt.emfPhaseRmsV(speedRpm), alt.frequencyHz(speedRpm));
     }
 
     /** The lowest speed at which the solved operating point carries current, found by bisection, rpm. */

@@ -148,4 +148,50 @@ class BridgeSolverTest {
         BridgeCircuit wider = circuit(three, threshold * (1 + 2 * Math.abs(margin)) / toPhase, f, r, l, vb, vd, rdc, rcab, 0);
         assertTrue(BridgeSolver.solve(wider).dcCurrentA() >= p.dcCurrentA(), "current rises with the margin");
     }
+
+    @Property(tries = 40)
+    void a_warm_started_sweep_gives_the_cold_answers_to_1e_9(
+            @ForAll boolean three,
+            @ForAll @DoubleRange(min = 0.05, max = 2) @Scale(6) double kePhaseVPerHz,
+            @ForAll @DoubleRange(min = 0.02, max = 5) @Scale(6) double r,
+            @ForAll @DoubleRange(min = 1e-4, max = 0.05) @Scale(6) double l,
+            @ForAll @DoubleRange(min = 0, max = 1) @Scale(6) double rdc,
+            @ForAll @DoubleRange(min = 1.5, max = 12) double topRatio) {
+        double vb = 24;
+        double vd = 0.8;
+        double lineFactor = three ? Math.sqrt(3) : 1;
+        double cutInHz = (vb + 2 * vd) / (Math.sqrt(2) * lineFactor * kePhaseVPerHz);
+        BridgeWarmStart warm = new BridgeWarmStart();
+        for (int i = 1; i <= 40; i++) {
+            double f = cutInHz * topRatio * i / 40;
+            BridgeCircuit c = circuit(three, kePhaseVPerHz * f, f, r, l, vb, vd, rdc, 0.05, 0.01);
+            BridgeOperatingPoint cold = BridgeSolver.solve(c);
+            BridgeOperatingPoint fast = BridgeSolver.solve(c, warm);
+            assertEquals(cold.mode(), fast.mode(), "mode at " + f + " Hz");
+            double[][] pairs = {
+                    {cold.dcCurrentA(), fast.dcCurrentA()}, {cold.dcCurrentRmsA(), fast.dcCurrentRmsA()},
+                    {cold.lineCurrentRmsA(), fast.lineCurrentRmsA()}, {cold.lineCurrentPeakA(), fast.lineCurrentPeakA()},
+                    {cold.deltaPhaseCurrentPeakA(), fast.deltaPhaseCurrentPeakA()},
+                    {cold.lineToLineTerminalVoltageRmsV(), fast.lineToLineTerminalVoltageRmsV()},
+                    {cold.powerFromEmfW(), fast.powerFromEmfW()}, {cold.diodeLossW(), fast.diodeLossW()},
+                    {cold.conductionAngleDeg(), fast.conductionAngleDeg()},
+                    {cold.commutationOverlapDeg(), fast.commutationOverlapDeg()}};
+            for (double[] p : pairs) {
+                assertEquals(p[0], p[1], 1e-9 * Math.max(Math.abs(p[0]), 1e-6), () -> "at " + f + " Hz: " + cold + " vs " + fast);
+            }
+        }
+    }
+
+    @Test
+    void the_zero_test_matches_the_solved_answer_on_both_sides_of_the_threshold() {
+        double vb = 12;
+        double vd = 0.7;
+        double threshold = (vb + 2 * vd) / Math.cos(BridgeModel.MIN_WINDOW_RAD);
+        double ePhaseAtThreshold = threshold / (Math.sqrt(2) * Math.sqrt(3));
+        for (double ratio : new double[] {0.999, 1 - 1e-9, 1 + 1e-9, 1.001}) {
+            BridgeCircuit c = circuit(true, ePhaseAtThreshold * ratio, 50, 0.3, 2e-3, vb, vd, 0.01, 0.02, 0.01);
+            assertEquals(ratio > 1, BridgeSolver.conducts(c), "zero test at ratio " + ratio);
+            assertEquals(ratio > 1, BridgeSolver.solve(c).dcCurrentA() > 0, "solved current at ratio " + ratio);
+        }
+    }
 }

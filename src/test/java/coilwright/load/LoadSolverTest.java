@@ -78,4 +78,48 @@ class LoadSolverTest {
         double relativeError = Math.abs(shortcutIdc - exact.dcCurrentA()) / exact.dcCurrentA();
         assertTrue(relativeError > 0.2, "shortcut " + shortcutIdc + " A vs exact " + exact.dcCurrentA() + " A");
     }
+
+    @Test
+    void a_sweep_in_speed_order_gives_the_single_point_answers_for_every_load_and_connection() {
+        BatteryLoad single = new BatteryLoad(Battery.of(Chemistry.LIFEPO4, 4, ChargeStage.NOMINAL),
+                new Rectifier(BridgeType.SINGLE_PHASE_BRIDGE, DiodeType.SCHOTTKY), AC, DC);
+        Object[][] cases = {
+                {new AcSource(3, Connection.STAR, 1, 1, 0.3, 0.002), BATTERY_3PH},
+                {new AcSource(3, Connection.DELTA, 1, 1, 0.9, 0.006), BATTERY_3PH},
+                {new AcSource(1, Connection.STAR, 1, 1, 0.4, 0.003), single},
+                {new AcSource(3, Connection.DELTA, 1, 1, 0.9, 0.006), new ResistiveLoad(3, AC)},
+                {new AcSource(1, Connection.STAR, 1, 1, 0.4, 0.003), new ResistiveLoad(3, AC)}};
+        for (Object[] c : cases) {
+            AcSource ref = (AcSource) c[0];
+            Load load = (Load) c[1];
+            LoadSolver.Sweep sweep = LoadSolver.sweep(ref, load);
+            for (int i = 1; i <= 60; i++) {
+                double f = 2.5 * i;
+                double e = 1.1 * f;
+                OperatingPoint cold = LoadSolver.solve(ref.withEmfAndFrequency(e, f), load);
+                OperatingPoint warm = sweep.solveAt(e, f);
+                String at = load.getClass().getSimpleName() + " " + ref.connection() + " at " + f + " Hz";
+                assertEquals(cold.mode(), warm.mode(), at);
+                assertEquals(cold.dcCurrentA(), warm.dcCurrentA(), 1e-9 * Math.max(cold.dcCurrentA(), 1e-6), at);
+                assertEquals(cold.phaseCurrentRmsA(), warm.phaseCurrentRmsA(), 1e-9 * cold.phaseCurrentRmsA() + 1e-15, at);
+                assertEquals(cold.phaseCurrentPeakA(), warm.phaseCurrentPeakA(), 1e-9 * cold.phaseCurrentPeakA() + 1e-15, at);
+                assertEquals(cold.powerToLoadW(), warm.powerToLoadW(), 1e-9 * cold.powerToLoadW() + 1e-15, at);
+                assertEquals(cold.lineToLineTerminalVoltageRmsV(), warm.lineToLineTerminalVoltageRmsV(),
+                        1e-9 * cold.lineToLineTerminalVoltageRmsV(), at);
+                assertEquals(cold.dcCurrentA() > 0, sweep.conductsAt(e, f) && cold.dcCurrentA() > 0, at);
+            }
+        }
+    }
+
+    @Test
+    void a_sweep_names_an_out_of_range_emf_or_frequency_like_the_source_does() {
+        LoadSolver.Sweep sweep = LoadSolver.sweep(new AcSource(3, Connection.STAR, 1, 1, 0.3, 0.002), BATTERY_3PH);
+        InvalidInputException e = assertThrows(InvalidInputException.class, () -> sweep.solveAt(-1, 50));
+        assertEquals("emfPhaseRmsV", e.errors().get(0).field());
+        InvalidInputException f = assertThrows(InvalidInputException.class, () -> sweep.conductsAt(10, Double.NaN));
+        assertEquals("frequencyHz", f.errors().get(0).field());
+        InvalidInputException mismatch = assertThrows(InvalidInputException.class,
+                () -> LoadSolver.sweep(new AcSource(1, Connection.STAR, 1, 1, 0.3, 0.002), BATTERY_3PH));
+        assertEquals("rectifier.type", mismatch.errors().get(0).field());
+    }
 }

@@ -86,4 +86,48 @@ class AlternatorEvaluatorPropertiesTest {
         assertTrue(i1 > 0, "current above cut-in");
         assertTrue(i2 > i1, "current rises with speed: " + i1 + " -> " + i2);
     }
+
+    @Property(tries = 25)
+    void the_warm_started_sweep_agrees_with_cold_single_point_solves(@ForAll("cases") Case c,
+                                                                     @ForAll @DoubleRange(min = 100, max = 900) double maxRpm) {
+        Alternator alt = AlternatorModel.build(c.spec());
+        EvaluationRequest req = new EvaluationRequest(c.spec(), c.load(), new SpeedRange(0, maxRpm, 61), 0.55 * maxRpm, 0);
+        AlternatorEvaluation fast = AlternatorEvaluator.evaluate(alt, req);
+        for (int i = 0; i < req.speedRange().points(); i++) {
+            assertSamePoint(AlternatorEvaluator.point(alt, c.load(), req.speedRange().speedRpm(i)), fast.points().get(i));
+        }
+        assertSamePoint(AlternatorEvaluator.point(alt, c.load(), req.effectiveRatedSpeedRpm()), fast.rated());
+        if (c.load() instanceof BatteryLoad) {
+            double reference = AlternatorEvaluator.solvedCutInRpm(alt, c.load(), fast.cutInSpeedRpm());
+            assertEquals(reference, fast.cutInSpeedSolvedRpm(), 1e-12 * reference, "solved cut-in");
+            assertTrue(AlternatorEvaluator.point(alt, c.load(), fast.cutInSpeedSolvedRpm()).dcCurrentA() > 0,
+                    "the solver itself carries current at the solved cut-in");
+        }
+    }
+
+    /** Every component equal to 1e-9 of the point's own scale (its largest power, current or voltage). */
+    private static void assertSamePoint(SpeedPoint expected, SpeedPoint actual) {
+        assertEquals(expected.mode(), actual.mode(), "conduction mode at " + expected.speedRpm() + " rpm");
+        for (java.lang.reflect.RecordComponent rc : SpeedPoint.class.getRecordComponents()) {
+            if (rc.getType() != double.class) {
+                continue;
+            }
+            double e = component(rc, expected);
+            double a = component(rc, actual);
+            double tol = 1e-9 * Math.max(Math.abs(e), 1e-9 * scale(expected)) + 1e-300;
+            assertEquals(e, a, tol, rc.getName() + " at " + expected.speedRpm() + " rpm");
+        }
+    }
+
+    private static double scale(SpeedPoint p) {
+        return Math.max(Math.max(p.shaftPowerW(), p.emfLineRmsV()), Math.max(p.phaseCurrentRmsA(), 1));
+    }
+
+    private static double component(java.lang.reflect.RecordComponent rc, SpeedPoint p) {
+        try {
+            return (double) rc.getAccessor().invoke(p);
+        } catch (ReflectiveOperationException e) {
+            throw new AssertionError(e);
+        }
+    }
 }
