@@ -36,8 +36,11 @@ public final class Checks {
 
     /** min <= value <= max and finite. */
     public Checks range(String field, double value, double min, double max) {
+        if (value >= min && value <= max) {
+            return this; // the common case builds no text: records are validated on every operating point
+        }
         String allowed = fmt(min) + " to " + fmt(max);
-        if (finite(field, value, allowed) && !(value >= min && value <= max)) {
+        if (finite(field, value, allowed)) {
             fail(field, value, "must be between " + fmt(min) + " and " + fmt(max), allowed);
         }
         return this;
@@ -45,8 +48,11 @@ public final class Checks {
 
     /** min < value <= max and finite. */
     public Checks rangeExclusiveMin(String field, double value, double min, double max) {
+        if (value > min && value <= max) {
+            return this;
+        }
         String allowed = "> " + fmt(min) + " and <= " + fmt(max);
-        if (finite(field, value, allowed) && !(value > min && value <= max)) {
+        if (finite(field, value, allowed)) {
             fail(field, value, "must be " + allowed, allowed);
         }
         return this;
