@@ -5,53 +5,41 @@ import coilwright.machine.AlternatorModel;
 import coilwright.system.AlternatorEvaluation;
 import coilwright.system.AlternatorEvaluator;
 import coilwright.system.EvaluationRequest;
-import coilwright.validation.InfeasibleDesignException;
-import coilwright.validation.InvalidInputException;
 import coilwright.winding.StarOfSlots;
 import coilwright.winding.Winding;
 import coilwright.winding.WindingSpec;
-import java.util.function.Supplier;
 
 /** The calculations the API and the pages share: evaluate a design, lay out a winding, list the catalogues. */
 public final class EvaluationService {
-    /**
-     * Evaluations kept for repeated identical requests (pages re-posting a form, scripts polling). An evaluation
-     * of the largest speed range (1000 points) is about 0.2 MB, so the cache stays under about 13 MB.
-     */
-    public static final int CACHED_EVALUATIONS = 64;
-
     private final Catalogue catalogue = Catalogue.build();
-    private final LruCache<EvaluationRequest, AlternatorEvaluation> evaluations;
+    private final ResultCache cache;
 
+    /** With a cache of its own (tests, tools); the running service shares one through {@link Services}. */
     public EvaluationService() {
-        this(CACHED_EVALUATIONS);
+        this(new ResultCache(ResultCache.DEFAULT_BUDGET_BYTES));
     }
 
-    /** @param cachedEvaluations most evaluations kept, 0 for none */
-    public EvaluationService(int cachedEvaluations) {
-        this.evaluations = new LruCache<>(cachedEvaluations);
+    public EvaluationService(ResultCache cache) {
+        this.cache = cache;
     }
 
     /**
      * An alternator and its load over a speed range. Evaluation is a pure function of the request (a record with
-     * value equality), so identical requests are answered from a small LRU cache.
+     * value equality), so an equal request is answered from the shared {@link ResultCache}.
      *
-     * @throws InvalidInputException     when a part is out of range; fields are paths in the request
-     *                                   ({@code alternator.winding.slots})
-     * @throws InfeasibleDesignException when the design cannot be built; its field is a path in the request
+     * @throws coilwright.validation.InvalidInputException     when a part is out of range; fields are paths in the
+     *                                                         request ({@code alternator.winding.slots})
+     * @throws coilwright.validation.InfeasibleDesignException when the design cannot be built; its field is a path in
+     *                                                         the request
+     * @throws coilwright.validation.SolverFailedException     when a numerical method gives up on the input
      */
     public AlternatorEvaluation evaluate(EvaluationRequest request) {
-        return evaluations.get(request, this::compute);
+        return cache.get(request, r -> AlternatorEvaluator.evaluate(alternator(r.alternator()), r));
     }
 
-    private AlternatorEvaluation compute(EvaluationRequest request) {
-        Alternator alternator = within("alternator", () -> AlternatorModel.build(request.alternator()));
-        return AlternatorEvaluator.evaluate(alternator, request);
-    }
-
-    /** A winding layout and its factors on its own. */
+    /** A winding layout and its factors on its own; fields are those of the winding spec (the request body). */
     public Winding layout(WindingSpec spec) {
-        return StarOfSlots.layout(spec);
+        return cache.get(spec, StarOfSlots::layout);
     }
 
     /** Magnet grades, wire sizes, battery chemistries, cooling bands, insulation classes and diodes. */
@@ -59,14 +47,8 @@ public final class EvaluationService {
         return catalogue;
     }
 
-    /** Runs a part's calculation, placing its field paths under the part's name in the request. */
-    private static <T> T within(String part, Supplier<T> calc) {
-        try {
-            return calc.get();
-        } catch (InvalidInputException e) {
-            throw e.under(part);
-        } catch (InfeasibleDesignException e) {
-            throw new InfeasibleDesignException(e.field().isEmpty() ? part : part + "." + e.field(), e.getMessage());
-        }
+    /** The machine of a request whose alternator part is called {@code alternator}, with its errors placed there. */
+    static Alternator alternator(coilwright.machine.AlternatorSpec spec) {
+        return RequestPaths.under("alternator", () -> AlternatorModel.build(spec));
     }
 }

@@ -1,15 +1,8 @@
 package coilwright.service;
 
-import coilwright.rewind.ExistingMachine;
-import coilwright.rewind.PoleOption;
 import coilwright.rewind.RewindPlan;
 import coilwright.rewind.RewindPlanner;
-import coilwright.rewind.RewindTarget;
 import coilwright.rewind.StatorOptions;
-import coilwright.validation.InfeasibleDesignException;
-import coilwright.validation.InvalidInputException;
-import coilwright.winding.Layers;
-import java.util.List;
 
 /**
  * Reconnect or rewind a measured machine, and list the pole counts a bare stator can be wound for. The planner's
@@ -17,24 +10,25 @@ import java.util.List;
  * request body {@code {machine, target}} (the target's own errors come from its constructor while binding).
  */
 public final class RewindService {
+    private final ResultCache cache;
 
-    /**
-     * @throws InvalidInputException with fields under {@code machine.} (contradicting counts, impossible resistance)
-     * @throws InfeasibleDesignException with its field under {@code machine.} (a winding that cannot be balanced)
-     */
-    public RewindPlan plan(ExistingMachine machine, RewindTarget target) {
-        try {
-            return RewindPlanner.plan(machine, target);
-        } catch (InvalidInputException e) {
-            throw e.under("machine");
-        } catch (InfeasibleDesignException e) {
-            throw new InfeasibleDesignException(e.field().isEmpty() ? "machine" : "machine." + e.field(),
-                    e.getMessage());
-        }
+    public RewindService(ResultCache cache) {
+        this.cache = cache;
     }
 
-    /** Balanced pole counts in [minPoles, maxPoles] for the slots, best winding factor first (may be empty). */
-    public List<PoleOption> statorOptions(int slots, int phases, Layers layers, int minPoles, int maxPoles) {
-        return StatorOptions.forSlots(slots, phases, layers, minPoles, maxPoles);
+    /**
+     * @throws coilwright.validation.InvalidInputException with fields under {@code machine.} (contradicting counts,
+     *                                                     impossible resistance)
+     * @throws coilwright.validation.InfeasibleDesignException with its field under {@code machine.} (a winding that
+     *                                                         cannot be balanced)
+     */
+    public RewindPlan plan(RewindRequest request) {
+        return cache.get(request, r -> RequestPaths.under("machine", () -> RewindPlanner.plan(r.machine(), r.target())));
+    }
+
+    /** Balanced pole counts in the request's range, best winding factor first (the list may be empty). */
+    public StatorOptionsResult statorOptions(StatorOptionsRequest request) {
+        return cache.get(request, r -> StatorOptionsResult.of(r,
+                StatorOptions.forSlots(r.slots(), r.phases(), r.layers(), r.minPoles(), r.maxPoles())));
     }
 }

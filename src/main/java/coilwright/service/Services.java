@@ -5,20 +5,29 @@ import coilwright.store.DesignStore;
 import com.fasterxml.jackson.databind.ObjectMapper;
 
 /**
- * Every service the web layer calls, built once at start-up.
+ * The service facade the web layer calls, built once at start-up: one {@link ResultCache} shared by every
+ * calculation and one {@link ExampleCatalogue} shared by every page and route.
  *
  * @param evaluation evaluate designs, lay out windings, catalogues
  * @param designs    saved designs: save, revise, read, recompute
  * @param matching   match a wind rotor or a hydro runner to an alternator
  * @param rewind     reconnect or rewind a measured machine; pole options of a bare stator
+ * @param examples   the example designs from {@code examples/}
+ * @param cache      the results of every calculation above, by request
  */
 public record Services(EvaluationService evaluation, DesignLibrary designs, MatchingService matching,
-                       RewindService rewind) {
+                       RewindService rewind, ExampleCatalogue examples, ResultCache cache) {
 
-    /** The services with their default wiring over an open database and the service's JSON mapper. */
+    /** The services over an open database, with the examples on the class path. */
     public static Services create(Database database, ObjectMapper mapper) {
-        EvaluationService evaluation = new EvaluationService();
+        return create(database, mapper, ExampleCatalogue.read(Services.class.getClassLoader(), mapper));
+    }
+
+    /** As {@link #create(Database, ObjectMapper)} with another example catalogue. */
+    public static Services create(Database database, ObjectMapper mapper, ExampleCatalogue examples) {
+        ResultCache cache = new ResultCache(ResultCache.DEFAULT_BUDGET_BYTES);
+        EvaluationService evaluation = new EvaluationService(cache);
         return new Services(evaluation, new DesignLibrary(evaluation, new DesignStore(database), mapper,
-                DesignLibrary.currentToolVersion()), new MatchingService(), new RewindService());
+                DesignLibrary.currentToolVersion()), new MatchingService(cache), new RewindService(cache), examples, cache);
     }
 }

@@ -40,7 +40,7 @@ class EvaluationServiceTest {
 
     @Test
     void without_a_cache_the_same_numbers_are_computed_again() throws IOException {
-        EvaluationService service = new EvaluationService(0);
+        EvaluationService service = new EvaluationService(new ResultCache(0));
         AlternatorEvaluation first = service.evaluate(resistiveAxial());
         AlternatorEvaluation second = service.evaluate(resistiveAxial());
         assertNotSame(first, second);

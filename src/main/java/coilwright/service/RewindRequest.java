@@ -1,4 +1,4 @@
-package coilwright.web.rewind;
+package coilwright.service;
 
 import coilwright.rewind.ExistingMachine;
 import coilwright.rewind.RewindTarget;

@@ -1,4 +1,4 @@
-package coilwright.web.rewind;
+package coilwright.service;
 
 import coilwright.validation.Checks;
 import coilwright.winding.Layers;

@@ -1,4 +1,4 @@
-package coilwright.web.rewind;
+package coilwright.service;
 
 import coilwright.rewind.PoleOption;
 import coilwright.winding.Layers;
@@ -20,7 +20,7 @@ public record StatorOptionsResult(int slots, int phases, Layers layers, int minP
         options = List.copyOf(options);
     }
 
-    static StatorOptionsResult of(StatorOptionsRequest r, List<PoleOption> options) {
+    public static StatorOptionsResult of(StatorOptionsRequest r, List<PoleOption> options) {
         return new StatorOptionsResult(r.slots(), r.phases(), r.layers(), r.minPoles(), r.maxPoles(), options);
     }
 }
