@@ -1,8 +1,7 @@
-package coilwright.web.pages;
+package coilwright.web.units;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 
-import coilwright.web.Units;
 import org.junit.jupiter.api.Test;
 
 class ShownTest {
@@ -33,8 +32,8 @@ class ShownTest {
 
     @Test
     void shown_text_keeps_six_significant_digits_without_trailing_zeros() {
-        assertEquals("1.62773", Shown.plain(1.627726633791505));
-        assertEquals("0", Shown.plain(0.0));
-        assertEquals("120", Shown.plain(120.00000000000001));
+        assertEquals("1.62773", Fmt.plain(1.627726633791505, 6));
+        assertEquals("0", Fmt.plain(0.0, 6));
+        assertEquals("120", Fmt.plain(120.00000000000001, 6));
     }
 }

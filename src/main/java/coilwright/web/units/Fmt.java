@@ -1,32 +1,38 @@
-package coilwright.web.rewind;
+package coilwright.web.units;
 
 import coilwright.rewind.Band;
-import coilwright.web.Quantity;
-import coilwright.web.Units;
 import java.math.BigDecimal;
 import java.math.MathContext;
 import java.util.Locale;
 import java.util.Optional;
 
-/** Number formatting for the rewind page ({@code ${fmt.sig(x, 4)}}): significant figures, bands, units. */
+/**
+ * Numbers as pages show them, in the request's units: every page's model has one as {@code fmt}
+ * ({@code ${fmt.sig(x, 4)}}, {@code ${fmt.temp(c)}}).
+ */
 public final class Fmt {
     private static final String NONE = "—";
     private final Units units;
 
-    Fmt(Units units) {
+    public Fmt(Units units) {
         this.units = units;
     }
 
-    /** A value to {@code digits} significant figures, plain notation for everyday magnitudes. */
-    public String sig(double v, int digits) {
+    /** A value to {@code digits} significant figures in plain notation ("0.5", "1.6277"), as a form field shows it. */
+    public static String plain(double v, int digits) {
         if (v == 0) {
             return "0";
         }
+        return new BigDecimal(v).round(new MathContext(digits)).stripTrailingZeros().toPlainString();
+    }
+
+    /** A value to {@code digits} significant figures, plain notation for everyday magnitudes, else scientific. */
+    public String sig(double v, int digits) {
         double a = Math.abs(v);
-        if (a < 1e-4 || a >= 1e7) {
+        if (v != 0 && (a < 1e-4 || a >= 1e7)) {
             return String.format(Locale.ROOT, "%." + (digits - 1) + "e", v);
         }
-        return new BigDecimal(v).round(new MathContext(digits)).stripTrailingZeros().toPlainString();
+        return plain(v, digits);
     }
 
     /** An optional value, or a dash. */
@@ -55,20 +61,23 @@ public final class Fmt {
         return b.map(x -> ranged(x, digits)).orElse(NONE);
     }
 
+    /** An SI value in the unit it is shown in, with its symbol: "1.63 mm". */
+    public String shown(Shown how, double si, int digits) {
+        return sig(how.fromSi(si, units), digits) + " " + how.symbol(units);
+    }
+
     /** A temperature in the request's units with its symbol. */
     public String temp(double celsius) {
-        return sig(units.show(Quantity.TEMPERATURE, celsius), 3) + " " + units.symbol(Quantity.TEMPERATURE);
+        return shown(Shown.CELSIUS, celsius, 3);
     }
 
     /** A length given in metres shown in mm (SI) or inches (imperial), with its symbol. */
     public String small(double metres) {
-        double mm = metres * 1000.0;
-        return sig(units.show(Quantity.SMALL_LENGTH, mm), 3) + " " + units.symbol(Quantity.SMALL_LENGTH);
+        return shown(Shown.MM, metres, 3);
     }
 
-    /** An area given in m^2 shown in mm^2 (SI) or square inches (imperial). */
+    /** A conductor's copper area given in m² shown in mm² (SI) or square inches (imperial). */
     public String area(double squareMetres) {
-        double mm2 = squareMetres * 1e6;
-        return units == Units.SI ? sig(mm2, 3) + " mm²" : sig(mm2 / (25.4 * 25.4), 3) + " in²";
+        return shown(Shown.WIRE_AREA, squareMetres, 3);
     }
 }

@@ -1,4 +1,4 @@
-package coilwright.web;
+package coilwright.web.units;
 
 import io.javalin.http.Context;
 import java.util.Locale;

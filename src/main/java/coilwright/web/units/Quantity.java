@@ -1,14 +1,16 @@
-package coilwright.web;
+package coilwright.web.units;
 
 /**
  * Quantities that change unit between SI and imperial display, with exact factors from NIST SP 811 (2008)
  * Appendix B: 1 ft = 0.3048 m, 1 in = 25.4 mm, 1 mi/h = 0.44704 m/s, 1 lb = 0.45359237 kg,
  * 1 US gal = 3.785411784 L, 1 lbf = 4.4482216152605 N (= lb x 9.80665 m/s^2), t/degF = 1.8 t/degC + 32.
- * Power stays in W.
+ * Power stays in W. Together with {@link Units} (the system a request chose), {@link Shown} (the unit a field is
+ * shown in) and {@link Fmt} (significant figures for pages), this is the one place where units are converted.
  */
 public enum Quantity {
     LENGTH("m", "ft", 0.3048),
     SMALL_LENGTH("mm", "in", 25.4),
+    SMALL_AREA("mm²", "in²", 25.4 * 25.4),
     SPEED("m/s", "mph", 0.44704),
     FLOW("m³/s", "US gpm", 3.785411784e-3 / 60.0),
     MASS("kg", "lb", 0.45359237),

@@ -1,4 +1,4 @@
-package coilwright.web;
+package coilwright.web.units;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 
