@@ -1,12 +1,17 @@
 package coilwright.web;
 
 import com.fasterxml.jackson.core.JsonProcessingException;
+import coilwright.store.DesignNotFoundException;
+import coilwright.store.EditForbiddenException;
+import coilwright.validation.FieldError;
 import coilwright.validation.InfeasibleDesignException;
 import coilwright.validation.InvalidInputException;
+import coilwright.validation.SolverFailedException;
 import io.javalin.config.RoutesConfig;
 import io.javalin.http.Context;
 import io.javalin.http.HttpResponseException;
 import io.javalin.http.HttpStatus;
+import java.util.List;
 import java.util.Map;
 import java.util.UUID;
 import org.slf4j.Logger;
@@ -15,8 +20,11 @@ import org.slf4j.LoggerFactory;
 /**
  * Every exception-to-response rule of the service, in one place. Under {@code /api/} (and for
  * {@code /health}, {@code /metrics}) the answer is RFC 9457 {@code application/problem+json}; elsewhere
- * the same problem is rendered as the HTML error page. An unexpected exception becomes a 500 with a
- * generic message and a log id; no stack trace or exception text ever reaches the body.
+ * the same problem is rendered as the HTML error page, or, when the request was handling a page form
+ * ({@link FormPage}), as that form again with the user's input and each message beside its field.
+ * The three typed failures of a calculation: invalid input 400, infeasible design 422, solver failure 422.
+ * An unexpected exception becomes a 500 with a generic message and a log id; no stack trace or exception
+ * text ever reaches the body.
  */
 public final class ErrorMapping {
     private static final Logger LOG = LoggerFactory.getLogger(ErrorMapping.class);
@@ -25,19 +33,43 @@ public final class ErrorMapping {
     }
 
     public static void register(RoutesConfig routes) {
-        routes.exception(InvalidInputException.class, (e, ctx) -> respond(ctx,
+        routes.exception(InvalidInputException.class, (e, ctx) -> failed(ctx, 400, e.errors(),
                 problem("invalid-input", 400, e.errors().size() == 1 ? "1 field is invalid."
                         : e.errors().size() + " fields are invalid.", ctx).withErrors(e.errors())));
+        routes.exception(InfeasibleDesignException.class, (e, ctx) -> failed(ctx, 422, e.field(), e.getMessage(),
+                problem("infeasible-design", 422, e.getMessage(), ctx).withField(e.field())));
+        routes.exception(SolverFailedException.class, (e, ctx) -> failed(ctx, 422, e.field(), e.getMessage(),
+                problem("solver-failed", 422, e.getMessage(), ctx).withField(e.field())));
         routes.exception(MalformedJsonException.class, (e, ctx) ->
-                respond(ctx, problem("malformed-json", 400, e.getMessage(), ctx)));
-        routes.exception(InfeasibleDesignException.class, (e, ctx) ->
-                respond(ctx, problem("infeasible-design", 422, e.getMessage(), ctx).withField(e.field())));
+                respond(ctx, problem("malformed-json", 400, e.getMessage(), ctx).withField(e.path())));
         routes.exception(NotFoundException.class, (e, ctx) -> respond(ctx, problem("not-found", 404, e.getMessage(), ctx)));
         routes.exception(ForbiddenException.class, (e, ctx) -> respond(ctx, problem("forbidden", 403, e.getMessage(), ctx)));
+        routes.exception(DesignNotFoundException.class, (e, ctx) ->
+                respond(ctx, problem("not-found", 404, sentence(e.getMessage()) + ".", ctx)));
+        routes.exception(EditForbiddenException.class, (e, ctx) ->
+                respond(ctx, problem("forbidden", 403, sentence(e.getMessage()) + "; nothing was changed.", ctx)));
         routes.exception(HttpResponseException.class, (e, ctx) -> respond(ctx, fromStatus(e.getStatus(), ctx)));
         routes.exception(Exception.class, (e, ctx) -> unexpected(e, ctx));
         routes.error(404, ctx -> respondUnlessDone(ctx, 404));
         routes.error(405, ctx -> respondUnlessDone(ctx, 405));
+    }
+
+    private static void failed(Context ctx, int status, String field, String message, Problem problem) {
+        failed(ctx, status, List.of(new FieldError(field, "", message, "")), problem);
+    }
+
+    /** A calculation's refusal: the page form again with messages when a page form was being handled. */
+    private static void failed(Context ctx, int status, List<FieldError> errors, Problem problem) {
+        java.util.Optional<FormPage> form = Route.isApiPath(ctx.path()) ? java.util.Optional.empty() : FormPage.of(ctx);
+        if (form.isPresent()) {
+            form.get().reject(ctx, status, errors);
+        } else {
+            respond(ctx, problem);
+        }
+    }
+
+    private static String sentence(String s) {
+        return s.isEmpty() ? s : Character.toUpperCase(s.charAt(0)) + s.substring(1);
     }
 
     private static void unexpected(Exception e, Context ctx) {

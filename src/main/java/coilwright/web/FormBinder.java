@@ -1,5 +1,7 @@
 package coilwright.web;
 
+import coilwright.web.units.Units;
+import coilwright.web.units.Quantity;
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.JsonNodeFactory;
@@ -30,26 +32,23 @@ public final class FormBinder {
         this.binder = binder;
     }
 
-    /** Binds SI form fields. */
-    public <T> FormResult<T> bind(Map<String, List<String>> form, Class<T> type) {
+    /**
+     * Binds SI form fields.
+     *
+     * @throws InvalidInputException listing every invalid field (shown on the page by {@link ErrorMapping})
+     * @throws InfeasibleDesignException when a record finds the input physically impossible
+     */
+    public <T> T bind(Map<String, List<String>> form, Class<T> type) {
         return bind(form, type, Units.SI, Map.of());
     }
 
     /**
+     * As {@link #bind(Map, Class)} with fields entered in the request's units.
+     *
      * @param fieldUnits for each numeric field shown in a convertible unit, its quantity
      */
-    public <T> FormResult<T> bind(Map<String, List<String>> form, Class<T> type, Units units,
-                                  Map<String, Quantity> fieldUnits) {
-        Map<String, String> values = new LinkedHashMap<>();
-        form.forEach((k, v) -> values.put(k, v.isEmpty() ? "" : v.get(0)));
-        try {
-            T record = binder.bind(toTree(form, type, units, fieldUnits), type);
-            return new FormResult<>(Optional.of(record), FieldErrors.none(), values);
-        } catch (InvalidInputException e) {
-            return new FormResult<>(Optional.empty(), FieldErrors.of(e), values);
-        } catch (InfeasibleDesignException e) {
-            return new FormResult<>(Optional.empty(), FieldErrors.of(e), values);
-        }
+    public <T> T bind(Map<String, List<String>> form, Class<T> type, Units units, Map<String, Quantity> fieldUnits) {
+        return binder.bind(toTree(form, type, units, fieldUnits), type);
     }
 
     /** The JSON tree for a record type built from form fields. */
@@ -143,7 +142,8 @@ public final class FormBinder {
         }
     }
 
-    static Map<String, List<String>> single(Map<String, String> values) {
+    /** Single-valued fields in the shape a posted form has. */
+    public static Map<String, List<String>> single(Map<String, String> values) {
         Map<String, List<String>> form = new HashMap<>();
         values.forEach((k, v) -> form.put(k, List.of(v)));
         return form;

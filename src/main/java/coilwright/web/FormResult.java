@@ -1,27 +1,19 @@
 package coilwright.web;
 
 import java.util.Map;
-import java.util.Optional;
 
 /**
- * A bound form: the record when every field was valid, the errors by field otherwise, and the text the
- * user entered (to re-render the form as it was). Templates read {@code form.value('winding.slots')}
- * and {@code form.errors}.
- *
- * @param <T> the input record
+ * A form as a page shows it: the text the user entered (or the starting values) and, when the form was rejected, the
+ * messages by field. Templates read {@code form.value('winding.slots')} and {@code form.errors}.
  */
-public record FormResult<T>(Optional<T> record, FieldErrors errors, Map<String, String> values) {
+public record FormResult(FieldErrors errors, Map<String, String> values) {
     public FormResult {
         values = Map.copyOf(values);
     }
 
-    /** A fresh form showing these values (e.g. defaults from {@link FormBinder#flatten}) and no errors. */
-    public static <T> FormResult<T> showing(Map<String, String> values) {
-        return new FormResult<>(Optional.empty(), FieldErrors.none(), values);
-    }
-
-    public boolean valid() {
-        return record.isPresent();
+    /** A form showing these values (e.g. defaults from {@link FormBinder#flatten}) and no errors. */
+    public static FormResult showing(Map<String, String> values) {
+        return new FormResult(FieldErrors.none(), values);
     }
 
     /** The entered text of a field, or an empty string. */

@@ -1,7 +1,5 @@
 package coilwright.web;
 
-import com.fasterxml.jackson.core.JsonLocation;
-import com.fasterxml.jackson.core.JsonProcessingException;
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import coilwright.validation.FieldError;
@@ -28,10 +26,10 @@ import java.util.Set;
 public final class RecordBinder {
     static final Object FAILED = new Object();
     private final JsonLeaves leaves;
-    private final ObjectMapper mapper;
+    private final JsonSyntax syntax;
 
     public RecordBinder(ObjectMapper mapper) {
-        this.mapper = mapper;
+        this.syntax = new JsonSyntax(mapper);
         this.leaves = new JsonLeaves(mapper, this);
     }
 
@@ -54,20 +52,9 @@ public final class RecordBinder {
         return type.cast(value);
     }
 
-    /** Parses a request body strictly; an empty body is malformed too. */
+    /** Parses a request body strictly; an empty body is malformed too ({@link JsonSyntax} words the fault). */
     public JsonNode parse(String json) {
-        if (json == null || json.isBlank()) {
-            throw new MalformedJsonException("The request body is empty: a JSON object is required.", 0, 0);
-        }
-        try {
-            return mapper.readTree(json);
-        } catch (JsonProcessingException e) {
-            JsonLocation at = e.getLocation();
-            long line = at == null ? 0 : at.getLineNr();
-            long column = at == null ? 0 : at.getColumnNr();
-            throw new MalformedJsonException("Malformed JSON at line " + line + ", column " + column + ": "
-                    + e.getOriginalMessage(), line, column);
-        }
+        return syntax.parse(json);
     }
 
     Object bindRecord(JsonNode node, Class<?> type, String path, List<FieldError> errors) {
