@@ -1,25 +1,31 @@
 package coilwright;
 
-import coilwright.service.ExampleFiles;
+import coilwright.service.ExampleCatalogue;
 import coilwright.service.Services;
 import coilwright.store.Database;
 import coilwright.store.DatabaseSettings;
 import coilwright.web.AppConfig;
 import coilwright.web.ErrorMapping;
+import coilwright.web.FormBinder;
 import coilwright.web.HealthHandler;
 import coilwright.web.JacksonJsonMapper;
 import coilwright.web.Json;
 import coilwright.web.Metrics;
 import coilwright.web.OpenApiHandler;
+import coilwright.web.RecordBinder;
 import coilwright.web.Route;
-import coilwright.web.Units;
-import coilwright.web.pages.DesignPages;
-import coilwright.web.match.MatchRoutes;
-import coilwright.web.api.ApiV1;
+import coilwright.web.api.EvaluationApi;
+import coilwright.web.match.MatchApi;
+import coilwright.web.match.MatchPages;
+import coilwright.web.pages.DesignPage;
 import coilwright.web.pages.HomePage;
 import coilwright.web.pages.ThymeleafRenderer;
-import coilwright.web.rewind.RewindRoutes;
-import coilwright.web.saved.SavedDesigns;
+import coilwright.web.pages.WindingPage;
+import coilwright.web.rewind.RewindApi;
+import coilwright.web.rewind.RewindPage;
+import coilwright.web.saved.SavedDesignApi;
+import coilwright.web.saved.SavedDesignPages;
+import coilwright.web.units.Units;
 import io.javalin.Javalin;
 import io.javalin.http.staticfiles.Location;
 import java.util.ArrayList;
@@ -34,8 +40,9 @@ import org.slf4j.Logger;
 import org.slf4j.LoggerFactory;
 
 /**
- * Entry point: reads the config, wires the service and starts the web server. The whole HTTP surface
- * is visible here: the route table ({@link #routeTable}), the filters and the error mapping.
+ * Entry point and the only wiring point: reads the config, builds the services and the handlers, and starts the
+ * web server. The whole HTTP surface is visible here: every route in one table ({@link #routeTable}: method, path,
+ * handler), the filters and the error mapping. Feature packages under {@code coilwright.web} hold handlers only.
  */
 public final class App {
     private static final Logger LOG = LoggerFactory.getLogger(App.class);
@@ -47,7 +54,7 @@ public final class App {
     private final Services services;
     private final ExecutorService demoLoader = Executors.newSingleThreadExecutor(r -> new Thread(r, "coilwright-demos"));
 
-    private App(AppConfig config, List<Route> extraRoutes) {
+    private App(AppConfig config, List<Route> extraRoutes, Optional<ExampleCatalogue> examples) {
         this.config = config;
         // open and migrate the database while this thread loads the JSON, metrics and template machinery:
         // the two overlap on a multi-core machine and start-up is shorter
@@ -59,7 +66,8 @@ public final class App {
         Metrics metrics = new Metrics();
         ThymeleafRenderer renderer = new ThymeleafRenderer();
         this.database = joinOpening(opening);
-        this.services = Services.create(database, Json.mapper());
+        this.services = examples.map(e -> Services.create(database, Json.mapper(), e))
+                .orElseGet(() -> Services.create(database, Json.mapper()));
         AtomicBoolean started = new AtomicBoolean(false);
         BooleanSupplier ready = () -> started.get() && database.isReachable(2);
         List<Route> table = new ArrayList<>(routeTable(ready, metrics, services));
@@ -96,29 +104,86 @@ public final class App {
         }
     }
 
-    /** Every route of the service. Handlers are thin and live in {@code coilwright.web}. */
+    /** Every route of the service: method, path and handler. Handlers are thin and live in {@code coilwright.web}. */
     private static List<Route> routeTable(BooleanSupplier ready, Metrics metrics, Services services) {
-        List<Route> r = new ArrayList<>(List.of(
+        RecordBinder binder = new RecordBinder(Json.mapper());
+        EvaluationApi designApi = new EvaluationApi(services.evaluation(), services.examples(), binder, Json.mapper());
+        MatchApi matchApi = new MatchApi(services.matching(), binder);
+        RewindApi rewindApi = new RewindApi(services.rewind(), binder);
+        SavedDesignApi savedApi = new SavedDesignApi(services.designs());
+        HomePage home = new HomePage(services.examples());
+        DesignPage design = new DesignPage(services.evaluation(), services.examples());
+        WindingPage winding = new WindingPage(services.evaluation());
+        MatchPages match = new MatchPages(services.matching(), services.examples(), binder);
+        RewindPage rewind = new RewindPage(services.rewind(), new FormBinder(binder));
+        SavedDesignPages saved = new SavedDesignPages(services.designs());
+        return List.of(
                 Route.get("/health", new HealthHandler(ready)),
                 Route.get("/metrics", metrics),
                 Route.get("/api/v1/openapi.json", new OpenApiHandler()),
-                Route.get("/", new HomePage())));
-        r.addAll(SavedDesigns.routes(services));
-        r.addAll(DesignPages.routes(services));
-        r.addAll(MatchRoutes.routes(services));
-        r.addAll(RewindRoutes.routes(services));
-        r.addAll(ApiV1.routes(services));
-        return r;
+                // JSON API: designs, windings, catalogues, examples
+                Route.post("/api/v1/evaluate", designApi::evaluate),
+                Route.post("/api/v1/winding", designApi::winding),
+                Route.get("/api/v1/catalogue", designApi::catalogue),
+                Route.get("/api/v1/examples", designApi::examples),
+                Route.get("/api/v1/examples/{slug}", designApi::example),
+                // JSON API: turbine matching and rewinding
+                Route.post("/api/v1/match/wind", matchApi::wind),
+                Route.post("/api/v1/match/hydro", matchApi::hydro),
+                Route.post("/api/v1/rewind", rewindApi::plan),
+                Route.post("/api/v1/rewind/stator-options", rewindApi::statorOptions),
+                // JSON API: saved designs
+                Route.post("/api/v1/designs", savedApi::create),
+                Route.post("/api/v1/designs/import", savedApi::importFile),
+                Route.post("/api/v1/designs/{designId}/revisions", savedApi::revise),
+                Route.get("/api/v1/designs/{designId}", savedApi::design),
+                Route.get("/api/v1/designs/{designId}/export", savedApi::exportDesign),
+                Route.get("/api/v1/designs/{designId}/curves.csv", savedApi::designCurves),
+                Route.get("/api/v1/revisions/{revisionId}", savedApi::revision),
+                Route.get("/api/v1/revisions/{revisionId}/export", savedApi::exportRevision),
+                Route.get("/api/v1/revisions/{revisionId}/curves.csv", savedApi::revisionCurves),
+                Route.get("/api/v1/revisions/{revisionId}/recomputed", savedApi::recomputed),
+                Route.get("/api/v1/compare", savedApi::compare),
+                Route.get("/api/v1/demos", savedApi::demos),
+                // pages: design, winding, matching, rewinding
+                Route.get("/", home::show),
+                Route.get("/design/new", design::newDesign),
+                Route.post("/design", design::submit),
+                Route.get("/design/results", design::exampleResults),
+                Route.get("/winding", winding::show),
+                Route.get("/match/wind", match::windForm),
+                Route.post("/match/wind", match::windResult),
+                Route.get("/match/hydro", match::hydroForm),
+                Route.post("/match/hydro", match::hydroResult),
+                Route.get("/rewind", rewind::show),
+                Route.post("/rewind", rewind::plan),
+                Route.post("/rewind/stator-options", rewind::statorOptions),
+                // pages: saved designs
+                Route.get("/saved/new", saved::newForm),
+                Route.post("/saved", saved::save),
+                Route.get("/d/{designId}", saved::latest),
+                Route.get("/d/{designId}/r/{revisionId}", saved::revision),
+                Route.get("/d/{designId}/r/{revisionId}/recomputed", saved::recomputed),
+                Route.get("/d/{designId}/r/{revisionId}/print", saved::print),
+                Route.get("/d/{designId}/revise", saved::reviseForm),
+                Route.post("/d/{designId}/revise", saved::revise),
+                Route.get("/compare", saved::compare),
+                Route.get("/demos", saved::demos));
     }
 
     /** A startable app; nothing listens until {@link #start}. */
     public static App create(AppConfig config) {
-        return new App(config, List.of());
+        return new App(config, List.of(), Optional.empty());
     }
 
     /** As {@link #create(AppConfig)} plus routes of the caller's own (tests). */
     public static App create(AppConfig config, List<Route> extraRoutes) {
-        return new App(config, extraRoutes);
+        return new App(config, extraRoutes, Optional.empty());
+    }
+
+    /** As {@link #create(AppConfig, List)} with the example designs of another catalogue (tests). */
+    public static App create(AppConfig config, List<Route> extraRoutes, ExampleCatalogue examples) {
+        return new App(config, extraRoutes, Optional.of(examples));
     }
 
     /** Starts listening; port 0 picks a free port (see {@link #port()}). */
@@ -136,7 +201,7 @@ public final class App {
 
     /** Stores the example designs as demos (idempotent; unchanged examples cost no evaluation). */
     private void loadDemos() {
-        List<String> slugs = services.designs().loadDemos(ExampleFiles.read(App.class.getClassLoader()));
+        List<String> slugs = services.designs().loadDemos(services.examples().texts());
         LOG.info("demo designs ready: {}", slugs);
     }
 

@@ -1,5 +1,6 @@
 package coilwright.web;
 
+import coilwright.web.units.Units;
 import static io.restassured.RestAssured.given;
 import static org.hamcrest.Matchers.containsString;
 import static org.hamcrest.Matchers.equalTo;

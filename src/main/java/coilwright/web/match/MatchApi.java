@@ -7,20 +7,20 @@ import coilwright.web.RecordBinder;
 import io.javalin.http.Context;
 
 /** {@code POST /api/v1/match/wind} and {@code POST /api/v1/match/hydro}: bind, match, answer; errors are mapped centrally. */
-final class MatchApi {
+public final class MatchApi {
     private final MatchingService matching;
     private final RecordBinder binder;
 
-    MatchApi(MatchingService matching, RecordBinder binder) {
+    public MatchApi(MatchingService matching, RecordBinder binder) {
         this.matching = matching;
         this.binder = binder;
     }
 
-    void wind(Context ctx) {
+    public void wind(Context ctx) {
         ctx.json(matching.wind(binder.bind(ctx.body(), WindMatchRequest.class)));
     }
 
-    void hydro(Context ctx) {
+    public void hydro(Context ctx) {
         ctx.json(matching.hydro(binder.bind(ctx.body(), HydroMatchRequest.class)));
     }
 }

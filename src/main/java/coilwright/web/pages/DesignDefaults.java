@@ -1,5 +1,6 @@
 package coilwright.web.pages;
 
+import coilwright.web.units.Units;
 import coilwright.conductor.Cooling;
 import coilwright.conductor.ThermalClass;
 import coilwright.conductor.WireSpec;
@@ -21,7 +22,6 @@ import coilwright.magnet.RadialSurfaceRotor;
 import coilwright.magnet.RotorSide;
 import coilwright.system.EvaluationRequest;
 import coilwright.system.SpeedRange;
-import coilwright.web.Units;
 import coilwright.winding.Layers;
 import coilwright.winding.WindingSpec;
 import java.util.HashMap;

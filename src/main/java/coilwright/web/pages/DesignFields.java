@@ -1,5 +1,7 @@
 package coilwright.web.pages;
 
+import coilwright.web.units.Units;
+import coilwright.web.units.Shown;
 import java.util.LinkedHashMap;
 import java.util.Map;
 
@@ -37,7 +39,7 @@ final class DesignFields {
     }
 
     /** The unit symbol shown beside a field, empty when the field has no conversion. */
-    static String symbol(String field, coilwright.web.Units units) {
+    static String symbol(String field, coilwright.web.units.Units units) {
         Shown s = SHOWN.get(field);
         return s == null ? "" : s.symbol(units);
     }

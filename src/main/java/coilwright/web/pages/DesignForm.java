@@ -1,18 +1,16 @@
 package coilwright.web.pages;
 
+import coilwright.web.units.Units;
+import coilwright.web.units.Shown;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import coilwright.load.BatteryLoad;
 import coilwright.load.ResistiveLoad;
 import coilwright.system.EvaluationRequest;
 import coilwright.validation.FieldError;
-import coilwright.validation.InfeasibleDesignException;
 import coilwright.validation.InvalidInputException;
-import coilwright.web.FieldErrors;
 import coilwright.web.FormBinder;
-import coilwright.web.FormResult;
 import coilwright.web.Json;
 import coilwright.web.RecordBinder;
-import coilwright.web.Units;
 import java.util.Arrays;
 import java.util.HashMap;
 import java.util.LinkedHashMap;
@@ -34,14 +32,19 @@ final class DesignForm {
     private final RecordBinder records = new RecordBinder(Json.mapper());
     private final FormBinder forms = new FormBinder(records);
 
-    /** Binds posted fields; invalid or infeasible input comes back as errors by field, with the text as typed. */
-    FormResult<EvaluationRequest> bind(Map<String, List<String>> posted, Units units) {
+    /**
+     * Binds posted fields.
+     *
+     * @throws InvalidInputException listing every invalid field, the topology and load choices included
+     * @throws coilwright.validation.InfeasibleDesignException when a part of the design is physically impossible
+     */
+    EvaluationRequest bind(Map<String, List<String>> posted, Units units) {
         Map<String, String> typed = new LinkedHashMap<>();
         posted.forEach((k, v) -> typed.put(k, v.isEmpty() ? "" : v.get(0).trim()));
         Optional<Topology> topology = Topology.parse(typed.get(Topology.FIELD));
         Class<?> load = LOADS.get(typed.getOrDefault(LOAD_TYPE, ""));
         if (topology.isEmpty() || load == null) {
-            return failed(typed, FieldErrors.of(choiceErrors(typed, topology.isEmpty(), load == null)));
+            throw new InvalidInputException(choiceErrors(typed, topology.isEmpty(), load == null));
         }
         Map<String, List<String>> si = toSi(typed, units);
         ObjectNode tree = forms.toTree(si, EvaluationRequest.class, Units.SI, Map.of());
@@ -52,18 +55,7 @@ final class DesignForm {
         }
         alternator.set("stator", variant(si, "alternator.stator.", topology.get().stator()));
         tree.set("load", variant(si, "load.", load));
-        try {
-            return new FormResult<>(Optional.of(records.bind(tree, EvaluationRequest.class)), FieldErrors.none(), typed);
-        } catch (InvalidInputException e) {
-            return failed(typed, FieldErrors.of(e));
-        } catch (InfeasibleDesignException e) {
-            return failed(typed, FieldErrors.of(e));
-        }
-    }
-
-    /** A form that came back from the calculation with errors (a 422 reason beside its field). */
-    static FormResult<EvaluationRequest> failed(Map<String, String> typed, FieldErrors errors) {
-        return new FormResult<>(Optional.empty(), errors, typed);
+        return records.bind(tree, EvaluationRequest.class);
     }
 
     /** A design as the form shows it: every field in its shown unit, plus the topology and load choices. */

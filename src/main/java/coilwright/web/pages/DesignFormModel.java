@@ -1,5 +1,6 @@
 package coilwright.web.pages;
 
+import coilwright.web.units.Units;
 import coilwright.conductor.Cooling;
 import coilwright.conductor.ThermalClass;
 import coilwright.conductor.WireGauge;
@@ -9,17 +10,13 @@ import coilwright.load.Chemistry;
 import coilwright.load.DiodeType;
 import coilwright.machine.Connection;
 import coilwright.magnet.MagnetGrades;
-import coilwright.system.EvaluationRequest;
+import coilwright.web.Choice;
 import coilwright.web.FormResult;
-import coilwright.web.Units;
 import coilwright.winding.Layers;
-import io.javalin.http.Context;
 import java.net.URLEncoder;
 import java.nio.charset.StandardCharsets;
-import java.util.Arrays;
 import java.util.HashMap;
 import java.util.LinkedHashMap;
-import java.util.List;
 import java.util.Map;
 import java.util.TreeMap;
 import java.util.stream.Collectors;
@@ -36,28 +33,29 @@ final class DesignFormModel {
         }
     }
 
-    static void render(Context ctx, int status, FormResult<EvaluationRequest> form) {
+    /** The design template's model around a form. */
+    static Map<String, Object> of(FormResult form, Units units) {
         Map<String, Object> m = new HashMap<>();
         m.put("form", form);
-        m.put("unit", new FieldUnits(Units.of(ctx)));
-        m.put("topologies", Topology.choices());
+        m.put("unit", new FieldUnits(units));
+        m.put("topologies", Choice.labelled(Topology.choices()));
         Map<String, String> loads = new LinkedHashMap<>();
         loads.put("BATTERY", "Battery through a diode bridge");
         loads.put("RESISTOR", "Resistor bank (star)");
-        m.put("loadTypes", loads);
-        m.put("grades", MagnetGrades.names());
-        m.put("phases", List.of("3", "1"));
-        m.put("layers", names(Layers.values()));
-        m.put("connections", names(Connection.values()));
-        m.put("gauges", names(WireGauge.values()));
-        m.put("grades12", List.of("2", "1"));
-        m.put("coolings", names(Cooling.values()));
-        m.put("classes", names(ThermalClass.values()));
-        m.put("chemistries", names(Chemistry.values()));
-        m.put("stages", names(ChargeStage.values()));
-        m.put("bridges", names(BridgeType.values()));
-        m.put("diodes", names(DiodeType.values()));
-        ctx.status(status).render("design", m);
+        m.put("loadTypes", Choice.labelled(loads));
+        m.put("grades", Choice.of(MagnetGrades.names()));
+        m.put("phases", Choice.of("3", "1"));
+        m.put("layers", Choice.names(Layers.values()));
+        m.put("connections", Choice.names(Connection.values()));
+        m.put("gauges", Choice.names(WireGauge.values()));
+        m.put("grades12", Choice.of("2", "1"));
+        m.put("coolings", Choice.names(Cooling.values()));
+        m.put("classes", Choice.names(ThermalClass.values()));
+        m.put("chemistries", Choice.names(Chemistry.values()));
+        m.put("stages", Choice.names(ChargeStage.values()));
+        m.put("bridges", Choice.names(BridgeType.values()));
+        m.put("diodes", Choice.names(DiodeType.values()));
+        return m;
     }
 
     /** The form pre-filled with these values, for "change this design" on a results page. */
@@ -68,9 +66,5 @@ final class DesignFormModel {
 
     private static String enc(String s) {
         return URLEncoder.encode(s, StandardCharsets.UTF_8);
-    }
-
-    private static List<String> names(Enum<?>[] values) {
-        return Arrays.stream(values).map(Enum::name).toList();
     }
 }

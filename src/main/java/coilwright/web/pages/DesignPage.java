@@ -1,60 +1,62 @@
 package coilwright.web.pages;
 
 import coilwright.service.EvaluationService;
-import coilwright.system.AlternatorEvaluation;
+import coilwright.service.ExampleCatalogue;
 import coilwright.system.EvaluationRequest;
-import coilwright.validation.InfeasibleDesignException;
-import coilwright.validation.InvalidInputException;
+import coilwright.web.FormPage;
 import coilwright.web.FormResult;
-import coilwright.web.Units;
+import coilwright.web.NotFoundException;
+import coilwright.web.units.Units;
 import io.javalin.http.Context;
 import java.util.HashMap;
 import java.util.Map;
 
-/** The design form ({@code GET /design/new}, {@code POST /design}) and the results of the examples ({@code GET /design/results}). */
-final class DesignPage {
+/**
+ * The design form ({@code GET /design/new}, {@code POST /design}) and the results of the examples
+ * ({@code GET /design/results}). A rejected form is shown again by {@code ErrorMapping}.
+ */
+public final class DesignPage {
     private final EvaluationService service;
+    private final ExampleCatalogue examples;
     private final DesignForm forms = new DesignForm();
 
-    DesignPage(EvaluationService service) {
+    public DesignPage(EvaluationService service, ExampleCatalogue examples) {
         this.service = service;
+        this.examples = examples;
     }
 
     /** A fresh form, an example's values ({@code ?example=slug}) or values handed back from a results page. */
-    void newDesign(Context ctx) {
+    public void newDesign(Context ctx) {
         Units units = Units.of(ctx);
         String slug = ctx.queryParam("example");
-        EvaluationRequest design = slug == null ? DesignDefaults.AXIAL_BATTERY : Examples.find(slug).document().design();
+        EvaluationRequest design = slug == null ? DesignDefaults.AXIAL_BATTERY : known(slug).document().design();
         Map<String, String> values = DesignDefaults.formValues(design, units);
         ctx.queryParamMap().forEach((k, v) -> values.put(k, v.isEmpty() ? "" : v.get(0)));
-        DesignFormModel.render(ctx, 200, FormResult.showing(values));
+        ctx.render("design", DesignFormModel.of(FormResult.showing(values), units));
     }
 
-    void submit(Context ctx) {
+    public void submit(Context ctx) {
         Units units = Units.of(ctx);
-        FormResult<EvaluationRequest> form = forms.bind(ctx.formParamMap(), units);
-        if (!form.valid()) {
-            DesignFormModel.render(ctx, 400, form);
-            return;
-        }
-        EvaluationRequest request = form.record().orElseThrow();
-        try {
-            AlternatorEvaluation e = service.evaluate(request);
-            ctx.render("results", ResultsModel.of("Your design", DesignFormModel.editLink(form.values()), request, e, units));
-        } catch (InfeasibleDesignException e) {
-            DesignFormModel.render(ctx, 422, Rejection.of(form, e));
-        } catch (InvalidInputException e) {
-            DesignFormModel.render(ctx, 400, Rejection.of(form, e));
-        }
+        Map<String, String> typed = FormPage.posted(ctx);
+        FormPage.open(ctx, new FormPage("design", typed, form -> DesignFormModel.of(form, units),
+                field -> Rejection.onForm(field, typed.keySet())));
+        EvaluationRequest request = forms.bind(ctx.formParamMap(), units);
+        ctx.render("results", ResultsModel.of("Your design", DesignFormModel.editLink(typed), request,
+                service.evaluate(request), units));
     }
 
     /** {@code GET /design/results?example=slug}: an example's results one click from the home page. */
-    void exampleResults(Context ctx) {
-        Examples.Example example = Examples.find(Examples.requiredSlug(ctx.queryParam("example")));
+    public void exampleResults(Context ctx) {
+        ExampleCatalogue.Example example = examples.require("example", ctx.queryParam("example"));
         EvaluationRequest request = example.document().design();
-        Map<String, Object> model = new HashMap<>(ResultsModel.of(example.document().title(),
+        Map<String, Object> model = new HashMap<>(ResultsModel.of(example.title(),
                 "/design/new?example=" + example.slug(), request, service.evaluate(request), Units.of(ctx)));
         model.put("notes", example.document().notes());
         ctx.render("results", model);
+    }
+
+    private ExampleCatalogue.Example known(String slug) {
+        return examples.find(slug).orElseThrow(() -> new NotFoundException("No example design named \"" + slug
+                + "\"; the examples are: " + String.join(", ", examples.slugs())));
     }
 }

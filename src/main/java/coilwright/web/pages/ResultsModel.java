@@ -1,9 +1,10 @@
 package coilwright.web.pages;
 
+import coilwright.web.units.Units;
+import coilwright.web.units.Shown;
 import coilwright.safety.Caution;
 import coilwright.system.AlternatorEvaluation;
 import coilwright.system.EvaluationRequest;
-import coilwright.web.Units;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Locale;
@@ -24,8 +25,8 @@ final class ResultsModel {
         m.put("heading", title);
         m.put("editLink", editLink);
         m.put("summary", Summary.of(e, request, units));
-        m.put("dangers", e.cautions().stream().filter(c -> c.severity() == Caution.Severity.DANGER).toList());
-        m.put("cautions", e.cautions().stream().filter(c -> c.severity() != Caution.Severity.DANGER).toList());
+        m.put("cautions", e.cautions().stream()
+                .sorted(java.util.Comparator.comparing((Caution c) -> c.severity() != Caution.Severity.DANGER)).toList());
         m.put("warnings", e.warnings());
         m.put("charts", ResultCharts.of(e, request));
         m.put("table", PointTable.of(e, units));

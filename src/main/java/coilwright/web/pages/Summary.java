@@ -1,26 +1,19 @@
 package coilwright.web.pages;
 
+import coilwright.web.Figure;
+import coilwright.web.units.Units;
+import coilwright.web.units.Shown;
 import coilwright.conductor.CurrentDensity;
 import coilwright.conductor.FillCheck;
 import coilwright.load.ResistiveLoad;
 import coilwright.system.AlternatorEvaluation;
 import coilwright.system.EvaluationRequest;
 import coilwright.system.SpeedPoint;
-import coilwright.web.Units;
 import java.util.List;
 import java.util.Locale;
 
 /** The figures an installer reads first: cut-in, rated output and efficiency, heat, fill and over-speed voltage. */
 final class Summary {
-    /**
-     * One figure of the summary.
-     *
-     * @param id     stable element id (tests and print)
-     * @param status "ok", "warn", "bad" or "" for a figure that has no limit
-     */
-    public record Figure(String id, String label, String value, String note, String status) {
-    }
-
     private Summary() {
     }
 

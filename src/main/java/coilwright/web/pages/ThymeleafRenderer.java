@@ -1,6 +1,7 @@
 package coilwright.web.pages;
 
-import coilwright.web.Units;
+import coilwright.web.units.Fmt;
+import coilwright.web.units.Units;
 import io.javalin.http.Context;
 import io.javalin.rendering.FileRenderer;
 import java.util.Locale;
@@ -13,8 +14,8 @@ import org.thymeleaf.templateresolver.ClassLoaderTemplateResolver;
 
 /**
  * Javalin's {@link FileRenderer} over Thymeleaf: {@code ctx.render("home", model)} renders the classpath
- * template {@code templates/home.html}. Every page also gets {@code path} (the request path, for the nav)
- * and {@code units} (the request's {@link Units}).
+ * template {@code templates/home.html}. Every page also gets {@code path} (the request path, for the nav),
+ * {@code units} (the request's {@link Units}) and {@code fmt} (numbers in those units, {@link Fmt}).
  */
 public final class ThymeleafRenderer implements FileRenderer {
     private final TemplateEngine engine = new TemplateEngine();
@@ -43,7 +44,9 @@ public final class ThymeleafRenderer implements FileRenderer {
         org.thymeleaf.context.Context page = new org.thymeleaf.context.Context(Locale.ROOT);
         page.setVariables(new java.util.HashMap<>(model));
         page.setVariable("path", ctx.path());
-        page.setVariable("units", Units.of(ctx));
+        Units units = Units.of(ctx);
+        page.setVariable("units", units);
+        page.setVariable("fmt", new Fmt(units));
         return render(filePath, page);
     }
 

@@ -1,6 +1,7 @@
 package coilwright.web.rewind;
 
 import coilwright.rewind.PoleOption;
+import coilwright.service.StatorOptionsResult;
 
 /** For templates: the design-form link of one pole option ({@code ${poleLinks.design(result, option)}}). */
 public final class PoleLinks {

@@ -1,27 +1,26 @@
 package coilwright.web.rewind;
 
+import coilwright.service.RewindRequest;
 import coilwright.service.RewindService;
+import coilwright.service.StatorOptionsRequest;
 import coilwright.web.RecordBinder;
 import io.javalin.http.Context;
 
 /** {@code POST /api/v1/rewind} and {@code POST /api/v1/rewind/stator-options}. */
-final class RewindApi {
+public final class RewindApi {
     private final RewindService service;
     private final RecordBinder binder;
 
-    RewindApi(RewindService service, RecordBinder binder) {
+    public RewindApi(RewindService service, RecordBinder binder) {
         this.service = service;
         this.binder = binder;
     }
 
-    void plan(Context ctx) {
-        RewindRequest r = binder.bind(ctx.body(), RewindRequest.class);
-        ctx.json(service.plan(r.machine(), r.target()));
+    public void plan(Context ctx) {
+        ctx.json(service.plan(binder.bind(ctx.body(), RewindRequest.class)));
     }
 
-    void statorOptions(Context ctx) {
-        StatorOptionsRequest r = binder.bind(ctx.body(), StatorOptionsRequest.class);
-        ctx.json(StatorOptionsResult.of(r,
-                service.statorOptions(r.slots(), r.phases(), r.layers(), r.minPoles(), r.maxPoles())));
+    public void statorOptions(Context ctx) {
+        ctx.json(service.statorOptions(binder.bind(ctx.body(), StatorOptionsRequest.class)));
     }
 }

@@ -1,7 +1,8 @@
 package coilwright.web.rewind;
 
-import coilwright.web.Quantity;
-import coilwright.web.Units;
+import coilwright.web.units.Units;
+import coilwright.web.units.Quantity;
+import coilwright.web.units.Shown;
 import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.LinkedHashMap;
@@ -93,7 +94,6 @@ final class RewindForm {
     }
 
     private static String temperature(Units units, double celsius) {
-        double shown = units.show(Quantity.TEMPERATURE, celsius);
-        return shown == Math.rint(shown) ? Long.toString((long) shown) : Double.toString(shown);
+        return Shown.CELSIUS.text(celsius, units);
     }
 }

@@ -17,63 +17,63 @@ import java.io.UncheckedIOException;
 import java.nio.charset.StandardCharsets;
 
 /** The JSON API of saved designs: save, revise, read, export, import, recompute and compare. */
-final class SavedDesignApi {
+public final class SavedDesignApi {
     private final DesignLibrary library;
     private final RecordBinder binder = new RecordBinder(Json.mapper());
 
-    SavedDesignApi(DesignLibrary library) {
+    public SavedDesignApi(DesignLibrary library) {
         this.library = library;
     }
 
-    void create(Context ctx) {
+    public void create(Context ctx) {
         answer(ctx, library.save(binder.bind(ctx.body(), DesignDocument.class)));
     }
 
     /** Accepts the file as the body or as the multipart field {@code file}; validated like any other input. */
-    void importFile(Context ctx) {
+    public void importFile(Context ctx) {
         answer(ctx, library.save(binder.bind(uploadedText(ctx), DesignDocument.class)));
     }
 
-    void revise(Context ctx) {
+    public void revise(Context ctx) {
         DesignDocument doc = binder.bind(ctx.body(), DesignDocument.class);
         answer(ctx, library.revise(ctx.pathParam("designId"), EditTokenHeader.of(ctx), doc));
     }
 
-    void design(Context ctx) {
+    public void design(Context ctx) {
         StoredRevision latest = library.latest(ctx.pathParam("designId"));
         var lines = library.history(latest.designId()).stream().map(s -> SavedJson.RevisionLine.of(latest.designId(), s)).toList();
         ctx.json(new SavedJson.Design(latest.designId(), latest.revisionId(), lines, view(latest)));
     }
 
-    void revision(Context ctx) {
+    public void revision(Context ctx) {
         ctx.json(view(library.revision(ctx.pathParam("revisionId"))));
     }
 
-    void exportDesign(Context ctx) {
+    public void exportDesign(Context ctx) {
         export(ctx, library.latest(ctx.pathParam("designId")));
     }
 
-    void exportRevision(Context ctx) {
+    public void exportRevision(Context ctx) {
         export(ctx, library.revision(ctx.pathParam("revisionId")));
     }
 
-    void designCurves(Context ctx) {
+    public void designCurves(Context ctx) {
         curves(ctx, library.latest(ctx.pathParam("designId")));
     }
 
-    void revisionCurves(Context ctx) {
+    public void revisionCurves(Context ctx) {
         curves(ctx, library.revision(ctx.pathParam("revisionId")));
     }
 
-    void recomputed(Context ctx) {
+    public void recomputed(Context ctx) {
         ctx.json(SavedJson.Recomputed.of(library.recompute(library.revision(ctx.pathParam("revisionId")))));
     }
 
-    void compare(Context ctx) {
+    public void compare(Context ctx) {
         ctx.json(Comparison.of(library, library.resolve(required(ctx, "a")), library.resolve(required(ctx, "b"))));
     }
 
-    void demos(Context ctx) {
+    public void demos(Context ctx) {
         ctx.json(library.demos().stream().map(d -> new SavedJson.Demo(d.slug(), d.designId(), d.latestRevisionId(),
                 d.title(), "/d/" + d.designId())).toList());
     }

@@ -20,53 +20,53 @@ import java.util.HashMap;
 import java.util.Map;
 
 /** The pages of saved designs. Title and notes are user text: templates show them with th:text only. */
-final class SavedDesignPages {
+public final class SavedDesignPages {
     private final DesignLibrary library;
     private final RecordBinder binder = new RecordBinder(Json.mapper());
 
-    SavedDesignPages(DesignLibrary library) {
+    public SavedDesignPages(DesignLibrary library) {
         this.library = library;
     }
 
-    void newForm(Context ctx) {
+    public void newForm(Context ctx) {
         ctx.render("saved-new", Map.of("title", "Save or import a design"));
     }
 
-    void save(Context ctx) {
+    public void save(Context ctx) {
         SaveOutcome outcome = library.save(binder.bind(submitted(ctx), DesignDocument.class));
         ctx.status(outcome.created() ? 201 : 200).render("saved-created", Map.of("outcome", outcome,
                 "rev", library.revision(outcome.revisionId())));
     }
 
-    void latest(Context ctx) {
+    public void latest(Context ctx) {
         show(ctx, library.latest(ctx.pathParam("designId")), false);
     }
 
-    void revision(Context ctx) {
+    public void revision(Context ctx) {
         show(ctx, ofDesign(ctx), false);
     }
 
-    void recomputed(Context ctx) {
+    public void recomputed(Context ctx) {
         show(ctx, ofDesign(ctx), true);
     }
 
-    void print(Context ctx) {
+    public void print(Context ctx) {
         StoredRevision r = ofDesign(ctx);
         ctx.render("saved-print", Map.of("rev", r, "results", ResultView.of(library.tree(r.resultJson()))));
     }
 
-    void reviseForm(Context ctx) {
+    public void reviseForm(Context ctx) {
         StoredRevision r = library.latest(ctx.pathParam("designId"));
         ctx.render("saved-revise", Map.of("rev", r, "document", pretty(library.document(r))));
     }
 
-    void revise(Context ctx) {
+    public void revise(Context ctx) {
         DesignDocument doc = binder.bind(submitted(ctx), DesignDocument.class);
         SaveOutcome o = library.revise(ctx.pathParam("designId"), ctx.formParam("editToken"), doc);
         ctx.redirect("/d/" + o.designId() + "/r/" + o.revisionId(), io.javalin.http.HttpStatus.SEE_OTHER);
     }
 
-    void compare(Context ctx) {
+    public void compare(Context ctx) {
         String a = ctx.queryParam("a");
         String b = ctx.queryParam("b");
         Map<String, Object> model = new HashMap<>(Map.of("a", a == null ? "" : a, "b", b == null ? "" : b));
@@ -76,7 +76,7 @@ final class SavedDesignPages {
         ctx.render("saved-compare", model);
     }
 
-    void demos(Context ctx) {
+    public void demos(Context ctx) {
         ctx.render("saved-demos", Map.of("demos", library.demos()));
     }
 

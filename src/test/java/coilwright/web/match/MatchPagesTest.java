@@ -1,18 +1,21 @@
 package coilwright.web.match;
 
+import static io.restassured.RestAssured.given;
+import static org.hamcrest.Matchers.startsWith;
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import coilwright.web.Html;
 import coilwright.web.TestApp;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Map;
 import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.extension.RegisterExtension;
 
-import java.util.HashMap;
-import java.util.Map;
-
-import static io.restassured.RestAssured.given;
-import static org.hamcrest.Matchers.containsString;
-import static org.hamcrest.Matchers.not;
-import static org.hamcrest.Matchers.startsWith;
-
+/** The wind and hydro match pages through the real app (pages parsed with jsoup). */
 class MatchPagesTest {
     @RegisterExtension
     static final TestApp APP = new TestApp();
@@ -20,6 +23,11 @@ class MatchPagesTest {
     @BeforeEach
     void pointRestAssured() {
         APP.useRestAssured();
+    }
+
+    private static Html post(String path, Map<String, String> form, int status) {
+        return Html.of(given().formParams(form).post(path).then().statusCode(status)
+                .contentType(startsWith("text/html")).extract().response());
     }
 
     private static Map<String, String> windForm() {
@@ -42,11 +50,21 @@ class MatchPagesTest {
 
     @Test
     void the_wind_form_starts_from_an_example_design_with_rotor_defaults() {
-        given().queryParam("example", "axial-wind-24v").get("/match/wind").then().statusCode(200)
-                .contentType(startsWith("text/html"))
-                .body(containsString("Axial-flux alternator for a 3 m wind rotor"))
-                .body(containsString("id=\"rotor.diameterM\" name=\"rotor.diameterM\" value=\"3.0\""))
-                .body(not(containsString("id=\"results\"")));
+        Html page = Html.of(given().queryParam("example", "axial-wind-24v").get("/match/wind").then().statusCode(200)
+                .contentType(startsWith("text/html")).extract().response());
+        assertTrue(page.doc().selectFirst(".lead strong").text().startsWith("Axial-flux alternator for a 3 m wind rotor"));
+        assertEquals("3.0", page.value("rotor.diameterM"));
+        assertEquals("axial-wind-24v", page.selected("example"));
+        assertFalse(page.has("results"));
+    }
+
+    @Test
+    void every_example_design_is_offered_on_both_match_pages() {
+        List<String> slugs = APP.app().services().examples().slugs();
+        for (String path : List.of("/match/wind", "/match/hydro")) {
+            Html page = Html.of(given().get(path).then().statusCode(200).extract().response());
+            assertEquals(slugs, page.options("example"), path);
+        }
     }
 
     @Test
@@ -57,13 +75,15 @@ class MatchPagesTest {
 
     @Test
     void a_valid_wind_form_shows_charts_the_energy_table_and_the_cautions() {
-        given().formParams(windForm()).post("/match/wind").then().statusCode(200)
-                .body(containsString("id=\"results\""))
-                .body(containsString("<svg"))
-                .body(containsString("Alternator demand at the rotor shaft"))
-                .body(containsString("id=\"energy\""))
-                .body(containsString("Open-circuit"))
-                .body(containsString("kWh"));
+        Html page = post("/match/wind", windForm(), 200);
+        assertTrue(page.has("results"));
+        assertEquals(2, page.all("#results .chart svg").size());
+        assertTrue(page.text().contains("Alternator demand at the rotor shaft"));
+        assertFalse(page.all("#energy tbody tr").isEmpty());
+        assertTrue(page.id("annual-energy").selectFirst(".value").text().endsWith("kWh"));
+        assertTrue(page.all(".cautions-list .caution").eachText().stream()
+                .anyMatch(t -> t.contains("Open-circuit line voltage")), "the open-circuit voltage caution");
+        assertEquals("3.6", page.value("rotor.diameterM"), "the form keeps what was entered");
     }
 
     @Test
@@ -71,19 +91,30 @@ class MatchPagesTest {
         Map<String, String> f = windForm();
         f.put("rotor.cpMax", "0.7");
         f.put("rotor.diameterM", "-1");
-        given().formParams(f).post("/match/wind").then().statusCode(400)
-                .body(containsString("error-summary"))
-                .body(containsString("Betz"))
-                .body(containsString("rotor.diameterM = -1"))
-                .body(containsString("value=\"0.7\""));
+        Html page = post("/match/wind", f, 400);
+        assertFalse(page.summary().isEmpty());
+        assertTrue(page.error("rotor.cpMax").contains("Betz"), page.error("rotor.cpMax"));
+        assertTrue(page.error("rotor.diameterM").startsWith("rotor.diameterM = -1"), page.error("rotor.diameterM"));
+        assertEquals("0.7", page.value("rotor.cpMax"));
+        assertFalse(page.has("results"));
     }
 
     @Test
-    void a_rotor_that_never_reaches_cut_in_is_a_422_with_the_reason() {
+    void a_rotor_that_never_reaches_cut_in_is_a_422_with_the_reason_beside_the_design_choice() {
         Map<String, String> f = windForm();
         f.put("rotor.maxRotorSpeedRpm", "40");
-        given().formParams(f).post("/match/wind").then().statusCode(422)
-                .body(containsString("never delivers power"));
+        Html page = post("/match/wind", f, 422);
+        assertTrue(page.error("example").contains("never delivers power"), page.error("example"));
+        assertEquals("40", page.value("rotor.maxRotorSpeedRpm"));
+    }
+
+    @Test
+    void an_unknown_example_in_a_posted_form_is_named_beside_the_choice() {
+        Map<String, String> f = windForm();
+        f.put("example", "no-such-design");
+        Html page = post("/match/wind", f, 400);
+        assertTrue(page.error("example").startsWith("example = \"no-such-design\": must name one of the example designs"),
+                page.error("example"));
     }
 
     private static Map<String, String> hydroForm() {
@@ -114,18 +145,19 @@ class MatchPagesTest {
 
     @Test
     void the_hydro_form_renders_with_its_flow_duration_rows() {
-        given().get("/match/hydro").then().statusCode(200)
-                .body(containsString("name=\"site.flowDuration[3].percentOfTime\""))
-                .body(containsString("<option value=\"CROSSFLOW\">CROSSFLOW</option>"));
+        Html page = Html.of(given().get("/match/hydro").then().statusCode(200).extract().response());
+        assertTrue(page.has("site.flowDuration[3].percentOfTime"));
+        assertTrue(page.options("runner.kind").contains("CROSSFLOW"));
+        assertEquals("radial-hydro-48v", page.selected("example"));
     }
 
     @Test
     void a_valid_hydro_form_shows_the_runaway_voltage_first() {
-        given().formParams(hydroForm()).post("/match/hydro").then().statusCode(200)
-                .body(containsString("id=\"runaway\""))
-                .body(containsString("Runaway: 1800 rpm at the runner"))
-                .body(containsString("Runner at design flow"))
-                .body(containsString("kWh (flow-duration curve)"));
+        Html page = post("/match/hydro", hydroForm(), 200);
+        assertTrue(page.id("runaway").text().startsWith("Runaway: 1800 rpm at the runner"), page.id("runaway").text());
+        assertTrue(page.text().contains("Runner at design flow"));
+        assertEquals("from the flow-duration curve", page.id("annual-energy").selectFirst(".note").text());
+        assertTrue(page.id("matched-speed").selectFirst(".value").text().endsWith("rpm"));
     }
 
     @Test
@@ -134,8 +166,9 @@ class MatchPagesTest {
         f.put("runner.kind", "CROSSFLOW");
         f.put("runner.jetCount", "1");
         f.put("site.grossHeadM", "300");
-        given().formParams(f).post("/match/hydro").then().statusCode(400)
-                .body(containsString("site.grossHeadM = 300"))
-                .body(containsString("CROSSFLOW runner"));
+        Html page = post("/match/hydro", f, 400);
+        assertTrue(page.error("site.grossHeadM").startsWith("site.grossHeadM = 300"), page.error("site.grossHeadM"));
+        assertTrue(page.error("site.grossHeadM").contains("CROSSFLOW runner"));
+        assertEquals("CROSSFLOW", page.selected("runner.kind"));
     }
 }

@@ -1,8 +1,10 @@
 package coilwright.web.pages;
 
+import coilwright.web.units.Units;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertInstanceOf;
+import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import coilwright.load.ResistiveLoad;
@@ -10,8 +12,8 @@ import coilwright.magnet.AxialDualRotor;
 import coilwright.magnet.RadialSurfaceRotor;
 import coilwright.magnet.RotorSide;
 import coilwright.system.EvaluationRequest;
-import coilwright.web.FormResult;
-import coilwright.web.Units;
+import coilwright.validation.InvalidInputException;
+import coilwright.web.FieldErrors;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
@@ -32,14 +34,12 @@ class DesignFormTest {
 
     @Test
     void the_default_form_binds_back_to_the_default_design() {
-        FormResult<EvaluationRequest> r = forms.bind(posted(defaults(Units.SI)), Units.SI);
-        assertTrue(r.valid(), r.errors().all().toString());
-        assertEquals(DesignDefaults.AXIAL_BATTERY, r.record().orElseThrow());
+        assertEquals(DesignDefaults.AXIAL_BATTERY, forms.bind(posted(defaults(Units.SI)), Units.SI));
     }
 
     @Test
     void the_imperial_form_binds_back_to_the_same_design_within_display_rounding() {
-        EvaluationRequest d = forms.bind(posted(defaults(Units.IMPERIAL)), Units.IMPERIAL).record().orElseThrow();
+        EvaluationRequest d = forms.bind(posted(defaults(Units.IMPERIAL)), Units.IMPERIAL);
         AxialDualRotor rotor = (AxialDualRotor) d.alternator().rotor();
         assertEquals(0.010, rotor.magnetThicknessM(), 1e-8);
         assertEquals(60.0, d.alternator().windingTempC(), 1e-4);
@@ -53,7 +53,7 @@ class DesignFormTest {
         f.put("loadType", "RESISTOR");
         f.put("alternator.turnsPerCoil", "20");
         f.put("alternator.wire.awg", "18");
-        EvaluationRequest d = forms.bind(posted(f), Units.SI).record().orElseThrow();
+        EvaluationRequest d = forms.bind(posted(f), Units.SI);
         RadialSurfaceRotor rotor = assertInstanceOf(RadialSurfaceRotor.class, d.alternator().rotor());
         assertEquals(RotorSide.OUTER, rotor.side());
         assertEquals(0.001, rotor.airGapM(), 1e-15, "1 mm entered");
@@ -64,18 +64,16 @@ class DesignFormTest {
     void unreadable_numbers_reach_the_binder_as_typed_and_are_named_there() {
         Map<String, String> f = defaults(Units.SI);
         f.put("alternator.rotor.magnetWidthM", "NaN");
-        FormResult<EvaluationRequest> r = forms.bind(posted(f), Units.SI);
-        assertFalse(r.valid());
+        InvalidInputException e = assertThrows(InvalidInputException.class, () -> forms.bind(posted(f), Units.SI));
         assertEquals("alternator.rotor.magnetWidthM = \"NaN\": must be a finite number",
-                r.errors().first("alternator.rotor.magnetWidthM"));
-        assertEquals("NaN", r.value("alternator.rotor.magnetWidthM"));
+                FieldErrors.of(e).first("alternator.rotor.magnetWidthM"));
     }
 
     @Test
     void a_missing_load_choice_is_named_with_the_allowed_values() {
         Map<String, String> f = defaults(Units.SI);
         f.remove("loadType");
-        FormResult<EvaluationRequest> r = forms.bind(posted(f), Units.SI);
-        assertEquals("loadType = missing: must be one of BATTERY, RESISTOR", r.errors().first("loadType"));
+        InvalidInputException e = assertThrows(InvalidInputException.class, () -> forms.bind(posted(f), Units.SI));
+        assertEquals("loadType = missing: must be one of BATTERY, RESISTOR", FieldErrors.of(e).first("loadType"));
     }
 }

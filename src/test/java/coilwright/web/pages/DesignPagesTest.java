@@ -1,19 +1,23 @@
 package coilwright.web.pages;
 
 import static io.restassured.RestAssured.given;
-import static org.hamcrest.Matchers.containsString;
-import static org.hamcrest.Matchers.not;
 import static org.hamcrest.Matchers.startsWith;
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import coilwright.service.ExampleCatalogue;
+import coilwright.web.Html;
 import coilwright.web.TestApp;
-import io.restassured.response.Response;
+import coilwright.web.units.Units;
 import java.util.HashMap;
+import java.util.List;
 import java.util.Map;
 import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.extension.RegisterExtension;
 
-/** The design pages through the real app: form, results, errors beside fields, examples. */
+/** The design pages through the real app: form, results, errors beside fields, examples (pages parsed with jsoup). */
 class DesignPagesTest {
     @RegisterExtension
     static final TestApp APP = new TestApp();
@@ -25,42 +29,56 @@ class DesignPagesTest {
 
     /** The form as a browser would post it: every field of a fresh form, shown values in SI display units. */
     static Map<String, String> defaultForm() {
-        return new HashMap<>(DesignDefaults.formValues(DesignDefaults.AXIAL_BATTERY, coilwright.web.Units.SI));
+        return new HashMap<>(DesignDefaults.formValues(DesignDefaults.AXIAL_BATTERY, Units.SI));
+    }
+
+    private static List<ExampleCatalogue.Example> examples() {
+        return APP.app().services().examples().all();
+    }
+
+    private static Html post(Map<String, String> form, int status) {
+        return Html.of(given().formParams(form).post("/design").then().statusCode(status)
+                .contentType(startsWith("text/html")).extract().response());
     }
 
     @Test
     void the_home_page_links_every_example_to_its_results_and_to_the_form() {
-        String body = given().get("/").then().statusCode(200).extract().asString();
-        for (Examples.Example ex : Examples.all()) {
-            org.junit.jupiter.api.Assertions.assertTrue(body.contains("/design/results?example=" + ex.slug()), ex.slug());
-            org.junit.jupiter.api.Assertions.assertTrue(body.contains("/design/new?example=" + ex.slug()), ex.slug());
+        Html home = Html.of(given().get("/").then().statusCode(200).extract().response());
+        assertTrue(examples().size() >= 3, "the three shipped examples are found");
+        for (ExampleCatalogue.Example ex : examples()) {
+            List<String> links = home.id("example-" + ex.slug()).select("a").eachAttr("href");
+            assertEquals(List.of("/design/results?example=" + ex.slug(), "/design/new?example=" + ex.slug()), links);
+            assertEquals(ex.title(), home.id("example-" + ex.slug()).selectFirst("h3").text());
         }
-        org.junit.jupiter.api.Assertions.assertTrue(Examples.all().size() >= 3, "the three shipped examples are found");
     }
 
     @Test
     void a_fresh_form_shows_defaults_with_mm_beside_lengths_and_inches_on_request() {
-        given().get("/design/new").then().statusCode(200).contentType(startsWith("text/html"))
-                .body(containsString("id=\"alternator.rotor.magnetThicknessM\" name=\"alternator.rotor.magnetThicknessM\" value=\"10\""))
-                .body(containsString("<option value=\"AXIAL_DUAL\" selected=\"selected\""))
-                .body(containsString("<span class=\"unit\">mm</span>"));
-        given().queryParam("units", "imperial").get("/design/new").then().statusCode(200)
-                .body(containsString("name=\"alternator.rotor.magnetThicknessM\" value=\"0.393701\""))
-                .body(containsString("<span class=\"unit\">in</span>"));
+        Html si = Html.of(given().get("/design/new").then().statusCode(200).contentType(startsWith("text/html"))
+                .extract().response());
+        assertEquals("10", si.value("alternator.rotor.magnetThicknessM"));
+        assertEquals("mm", si.unit("alternator.rotor.magnetThicknessM"));
+        assertEquals("AXIAL_DUAL", si.selected("topology"));
+        Html imperial = Html.of(given().queryParam("units", "imperial").get("/design/new").then().statusCode(200)
+                .extract().response());
+        assertEquals("0.393701", imperial.value("alternator.rotor.magnetThicknessM"));
+        assertEquals("in", imperial.unit("alternator.rotor.magnetThicknessM"));
     }
 
     @Test
     void an_example_pre_fills_the_form_with_its_own_values() {
-        given().queryParam("example", "radial-hydro-48v").get("/design/new").then().statusCode(200)
-                .body(containsString("name=\"alternator.winding.slots\" value=\"24\""))
-                .body(containsString("name=\"alternator.rotor.gapDiameterM\" value=\"140\""))
-                .body(containsString("<option value=\"RADIAL_INNER\" selected=\"selected\""));
+        Html page = Html.of(given().queryParam("example", "radial-hydro-48v").get("/design/new").then().statusCode(200)
+                .extract().response());
+        assertEquals("24", page.value("alternator.winding.slots"));
+        assertEquals("140", page.value("alternator.rotor.gapDiameterM"));
+        assertEquals("RADIAL_INNER", page.selected("topology"));
     }
 
     @Test
     void an_unknown_example_is_a_404_page_naming_the_known_ones() {
-        given().queryParam("example", "no-such").get("/design/new").then().statusCode(404)
-                .body(containsString("radial-hydro-48v"));
+        Html page = Html.of(given().queryParam("example", "no-such").get("/design/new").then().statusCode(404)
+                .extract().response());
+        assertTrue(page.doc().selectFirst(".detail").text().contains("radial-hydro-48v"));
     }
 
     @Test
@@ -70,22 +88,30 @@ class DesignPagesTest {
         f.put("loadType", "RESISTOR");
         f.put("alternator.turnsPerCoil", "20");
         f.put("alternator.wire.awg", "18");
-        given().formParams(f).post("/design").then().statusCode(200)
-                .body(containsString("id=\"cut-in\""))
-                .body(containsString("a resistor bank takes current at any speed"))
-                .body(containsString("EMF and terminal voltage"))
-                .body(containsString("class=\"winding-diagram\""))
-                .body(containsString("Winding factors by harmonic"));
+        Html page = post(f, 200);
+        assertEquals("none", page.id("cut-in").selectFirst(".value").text());
+        assertEquals("a resistor bank takes current at any speed", page.id("cut-in").selectFirst(".note").text());
+        assertEquals(3, page.all(".charts .chart svg").size());
+        assertTrue(page.text().contains("EMF and terminal voltage"));
+        assertFalse(page.all(".winding-diagram").isEmpty(), "the winding diagram");
+        assertTrue(page.all("table.factors caption").get(0).text().contains("Winding factors by harmonic"));
     }
 
     @Test
     void a_valid_battery_design_shows_its_cut_in_speed_and_cautions() {
-        Response r = given().formParams(defaultForm()).post("/design");
-        r.then().statusCode(200)
-                .body(containsString("Cut-in speed"))
-                .body(containsString("rpm on the solved curve"))
-                .body(containsString("class=\"caution"))
-                .body(containsString("DC-rated fusing at the battery"));
+        Html page = post(defaultForm(), 200);
+        assertEquals("Cut-in speed", page.id("cut-in").selectFirst(".label").text());
+        assertTrue(page.id("cut-in").selectFirst(".note").text().contains("rpm on the solved curve"));
+        List<String> cautions = page.all(".cautions-list .caution .caution-title").stream().map(e -> e.text()).toList();
+        assertTrue(cautions.stream().anyMatch(t -> t.contains("DC-rated fusing at the battery")), cautions.toString());
+    }
+
+    @Test
+    void danger_cautions_come_first() {
+        List<String> severities = post(defaultForm(), 200).all(".cautions-list .caution .caution-title strong").eachText();
+        List<String> dangerFirst = severities.stream().sorted(java.util.Comparator.comparing(s -> !s.equals("DANGER"))).toList();
+        assertTrue(severities.contains("DANGER"), severities.toString());
+        assertEquals(dangerFirst, severities);
     }
 
     @Test
@@ -94,21 +120,23 @@ class DesignPagesTest {
         f.put("alternator.winding.poles", "7");
         f.put("alternator.rotor.magnetWidthM", "abc");
         f.put("load.battery.cells", "");
-        given().formParams(f).post("/design").then().statusCode(400)
-                .body(containsString("class=\"field invalid\""))
-                .body(containsString("id=\"alternator.winding.poles-error\">alternator.winding.poles = 7: must be even"))
-                .body(containsString("id=\"alternator.rotor.magnetWidthM-error\">alternator.rotor.magnetWidthM = &quot;abc&quot;"))
-                .body(containsString("id=\"load.battery.cells-error\">load.battery.cells is missing"))
-                .body(containsString("value=\"abc\""))
-                .body(not(containsString("id=\"cut-in\"")));
+        Html page = post(f, 400);
+        assertTrue(page.error("alternator.winding.poles").startsWith("alternator.winding.poles = 7: must be even"),
+                page.error("alternator.winding.poles"));
+        assertTrue(page.error("alternator.rotor.magnetWidthM").startsWith("alternator.rotor.magnetWidthM = \"abc\""));
+        assertTrue(page.error("load.battery.cells").startsWith("load.battery.cells is missing"));
+        assertEquals("abc", page.value("alternator.rotor.magnetWidthM"));
+        assertTrue(page.id("alternator.winding.poles").parent().hasClass("invalid"));
+        assertFalse(page.has("cut-in"));
     }
 
     @Test
     void a_length_out_of_range_is_named_in_the_apis_si_terms() {
         Map<String, String> f = defaultForm();
         f.put("alternator.rotor.runningClearanceM", "0");
-        given().formParams(f).post("/design").then().statusCode(400)
-                .body(containsString("id=\"alternator.rotor.runningClearanceM-error\">alternator.rotor.runningClearanceM = 0.0"));
+        Html page = post(f, 400);
+        assertTrue(page.error("alternator.rotor.runningClearanceM").startsWith("alternator.rotor.runningClearanceM = 0.0"),
+                page.error("alternator.rotor.runningClearanceM"));
     }
 
     @Test
@@ -116,32 +144,35 @@ class DesignPagesTest {
         Map<String, String> f = defaultForm();
         f.put("alternator.winding.slots", "12");
         f.put("alternator.winding.poles", "12");
-        given().formParams(f).post("/design").then().statusCode(422)
-                .body(containsString("id=\"alternator.winding.slots-error\">12 slots with 12 poles"))
-                .body(containsString("cannot be balanced"));
+        Html page = post(f, 422);
+        assertTrue(page.error("alternator.winding.slots").startsWith("12 slots with 12 poles"), page.error("alternator.winding.slots"));
+        assertTrue(page.error("alternator.winding.slots").contains("cannot be balanced"));
+        assertEquals("12", page.value("alternator.winding.poles"));
     }
 
     @Test
     void an_unknown_machine_type_is_refused_by_name() {
         Map<String, String> f = defaultForm();
         f.put("topology", "LINEAR");
-        given().formParams(f).post("/design").then().statusCode(400)
-                .body(containsString("topology = &quot;LINEAR&quot;: must be one of RADIAL_INNER, RADIAL_OUTER, AXIAL_DUAL"));
+        Html page = post(f, 400);
+        assertEquals("topology = \"LINEAR\": must be one of RADIAL_INNER, RADIAL_OUTER, AXIAL_DUAL", page.error("topology"));
     }
 
     @Test
     void every_example_has_a_results_page_with_cut_in_and_cautions() {
-        for (Examples.Example ex : Examples.all()) {
-            given().queryParam("example", ex.slug()).get("/design/results").then().statusCode(200)
-                    .body(containsString(ex.document().title()))
-                    .body(containsString("id=\"cut-in\""))
-                    .body(containsString("class=\"caution"));
+        for (ExampleCatalogue.Example ex : examples()) {
+            Html page = Html.of(given().queryParam("example", ex.slug()).get("/design/results").then().statusCode(200)
+                    .extract().response());
+            assertEquals(ex.title(), page.doc().selectFirst("h1").text());
+            assertTrue(page.has("cut-in"), ex.slug());
+            assertFalse(page.all(".cautions-list .caution").isEmpty(), ex.slug());
         }
     }
 
     @Test
     void results_without_an_example_name_are_a_400_page() {
-        given().get("/design/results").then().statusCode(400).contentType(startsWith("text/html"))
-                .body(containsString("example is missing"));
+        Html page = Html.of(given().get("/design/results").then().statusCode(400).contentType(startsWith("text/html"))
+                .extract().response());
+        assertTrue(page.all(".field-errors li").get(0).text().contains("example is missing"));
     }
 }

@@ -10,8 +10,8 @@ class RejectionTest {
             "alternator.wire.gauge", "load.battery.cells");
 
     @Test
-    void a_machine_relative_field_lands_under_alternator() {
-        assertEquals("alternator.winding.slots", Rejection.onForm("winding.slots", FORM));
+    void a_choice_outside_the_request_keeps_its_name() {
+        assertEquals("topology", Rejection.onForm("topology", Set.of("topology", "alternator.winding.slots")));
     }
 
     @Test
@@ -21,12 +21,12 @@ class RejectionTest {
 
     @Test
     void a_whole_part_lands_on_its_first_field_in_name_order() {
-        assertEquals("alternator.wire.awg", Rejection.onForm("wire", FORM));
+        assertEquals("alternator.wire.awg", Rejection.onForm("alternator.wire", FORM));
     }
 
     @Test
     void a_reason_without_a_field_stays_a_form_level_message() {
         assertEquals("", Rejection.onForm("", FORM));
-        assertEquals("alternator.unknownPart", Rejection.onForm("unknownPart", FORM));
+        assertEquals("alternator.unknownPart", Rejection.onForm("alternator.unknownPart", FORM));
     }
 }

@@ -1,5 +1,6 @@
 package coilwright.web.rewind;
 
+import coilwright.service.RewindRequest;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import coilwright.conductor.WireSpec;
 import coilwright.machine.Connection;

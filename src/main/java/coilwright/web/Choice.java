@@ -1,0 +1,33 @@
+package coilwright.web;
+
+import java.util.Arrays;
+import java.util.List;
+import java.util.Map;
+
+/**
+ * One option of a select ({@code fragments/forms :: select}): the value sent and the label shown.
+ *
+ * @param value what the form posts
+ * @param label what the user reads
+ */
+public record Choice(String value, String label) {
+    /** Options whose label is their value, e.g. enum names. */
+    public static List<Choice> of(List<String> values) {
+        return values.stream().map(v -> new Choice(v, v)).toList();
+    }
+
+    /** Options whose label is their value. */
+    public static List<Choice> of(String... values) {
+        return of(List.of(values));
+    }
+
+    /** An enum's names as options. */
+    public static List<Choice> names(Enum<?>[] constants) {
+        return of(Arrays.stream(constants).map(Enum::name).toList());
+    }
+
+    /** Value to label, in the map's order. */
+    public static List<Choice> labelled(Map<String, String> labels) {
+        return labels.entrySet().stream().map(e -> new Choice(e.getKey(), e.getValue())).toList();
+    }
+}

@@ -1,0 +1,51 @@
+package coilwright.web.match;
+
+import coilwright.system.HydroMatchResult;
+import coilwright.system.WindMatchResult;
+import coilwright.web.Figure;
+import java.util.List;
+import java.util.Locale;
+
+/** The figures of a match result an installer reads first, for the shared summary block. */
+final class MatchSummary {
+    private MatchSummary() {
+    }
+
+    static List<Figure> wind(WindMatchResult r) {
+        var energy = r.annualEnergy();
+        return List.of(
+                Figure.of("air-density", "Air density", f("%.3f kg/m³", r.airDensityKgM3()), r.airDensitySource()),
+                Figure.of("cut-in", "Charging starts at", r.cutInWindSpeedMs().isPresent()
+                        ? f("%.1f m/s", r.cutInWindSpeedMs().getAsDouble()) : "never", "wind speed"),
+                Figure.of("annual-energy", "Annual energy to the battery", f("%.0f kWh", energy.annualEnergyKWh()),
+                        f("%.2f kWh a day", energy.dailyEnergyKWh())),
+                Figure.of("capacity-factor", "Capacity factor", f("%.1f %%", 100 * energy.capacityFactor()),
+                        f("of %.0f W", energy.ratedPowerW())),
+                Figure.of("matching", "Matching", f("%.0f %%", r.matchingPercent()),
+                        f("of the battery energy with an ideal rotor (rotor capture %.0f %%)", r.rotorCapturePercent())),
+                Figure.of("wind-class", "Small wind class", r.windClass().note(), "IEC 61400-2, for context"));
+    }
+
+    static List<Figure> hydro(HydroMatchResult r) {
+        var p = r.penstock();
+        return List.of(
+                Figure.of("net-head", "Net head", f("%.2f m", p.netHeadM()), f("penstock efficiency %.1f %%; "
+                                + "Hazen-Williams friction %.2f m against Darcy-Weisbach %.2f m",
+                        100 * p.penstockEfficiency(), p.hazenWilliamsFrictionLossM(), p.frictionLossM())),
+                Figure.of("runner", "Runner", r.runnerKind().name() + f(", %.0f mm", 1000 * r.runnerDiameterM()),
+                        f("best speed %.0f rpm", r.optimumRunnerSpeedRpm())),
+                Figure.of("power", "Hydraulic / peak shaft power", f("%.0f W / %.0f W", r.hydraulicPowerW(),
+                        r.peakShaftPowerW()), ""),
+                Figure.of("matched-speed", "Matched speed", f("%.0f rpm", r.matched().runnerSpeedRpm()),
+                        f("%.0f %% of best", 100 * r.matched().speedShareOfOptimum())),
+                Figure.of("battery-power", "Power to the battery", f("%.0f W", r.matched().powerToBatteryW()),
+                        f("%.1f kWh a day", r.dailyEnergyKWh())),
+                Figure.of("annual-energy", "Annual energy", r.annualEnergyKWh().isPresent()
+                        ? f("%.0f kWh", r.annualEnergyKWh().getAsDouble()) : "—", r.annualEnergyKWh().isPresent()
+                        ? "from the flow-duration curve" : "give a flow-duration curve"));
+    }
+
+    private static String f(String format, Object... args) {
+        return String.format(Locale.ROOT, format, args);
+    }
+}
