@@ -14,10 +14,10 @@ import java.util.function.Function;
  */
 public final class ResultCache {
     /**
-     * About 64 MB of results: some two hundred 200-point evaluations (about 0.3 MB each as objects) or thirty of the
-     * largest (1000 points).
+     * About 16 MB of results: a 200-point evaluation weighs about 40 kB (some 180 bytes a speed point plus the
+     * machine), the largest (1000 points) about 0.2 MB, so some four hundred of the one or eighty of the other.
      */
-    public static final long DEFAULT_BUDGET_BYTES = 64L * 1024 * 1024;
+    public static final long DEFAULT_BUDGET_BYTES = 16L * 1024 * 1024;
 
     private final Cache<Record, Object> entries;
 

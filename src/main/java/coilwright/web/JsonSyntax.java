@@ -22,8 +22,10 @@ final class JsonSyntax {
     private record Situation(String fragment, String expected) {
     }
 
+    private static final String NOT_A_NUMBER = "not a number: use a finite decimal";
+    private static final String TRAILING = "expected the end of the body after the JSON value, found more text";
     private static final List<Situation> SITUATIONS = List.of(
-            new Situation("Non-standard token", "not a number: use a finite decimal"),
+            new Situation("Non-standard token", NOT_A_NUMBER),
             new Situation("Unexpected end-of-input", "the body ends before the JSON value is complete: "
                     + "close every object with } and every array with ]"),
             new Situation("double-quote to start field name", "expected a field name in double quotes "
@@ -34,8 +36,9 @@ final class JsonSyntax {
             new Situation("Duplicate field", "a field appears twice in the same object: give each field once"),
             new Situation("Leading zeroes", "a number must not start with 0 unless it is 0 or 0.x"),
             new Situation("Invalid numeric value", "expected a number written as in JSON, e.g. 12, -0.5 or 1.2e-3"),
-            new Situation("control character", "a string may not hold a raw line break or control character: "
-                    + "write it as \\n, \\t or \\u00XX"),
+            new Situation("Illegal unquoted character", "a string may not hold a raw line break or control "
+                    + "character: write it as \\n, \\t or \\u00XX"),
+            new Situation("Trailing token", TRAILING),
             new Situation("Unexpected close marker", "a closing bracket does not match the opening one"),
             new Situation("Unrecognized token", "expected a value: a number, a string in double quotes, true, false, "
                     + "null, an object or an array"),
@@ -62,11 +65,16 @@ final class JsonSyntax {
             JsonNode tree = mapper.readTree(parser);
             JsonLocation end = parser.currentLocation();
             if (more(parser)) {
-                throw malformed(end, "", "expected the end of the body after the JSON value, found more text");
+                throw malformed(end, "", TRAILING);
             }
             return tree;
         } catch (JsonProcessingException e) {
-            throw malformed(e.getLocation(), path(parser), expected(e.getOriginalMessage(), json, e.getLocation()));
+            JsonLocation at = e.getLocation();
+            String expected = expected(e.getOriginalMessage(), json, at);
+            if (expected.equals(NOT_A_NUMBER)) {
+                at = startOfWord(json, at);
+            }
+            throw malformed(at, path(parser), expected);
         } catch (IOException e) {
             throw malformed(null, "", "the body cannot be read as text");
         } finally {
@@ -87,7 +95,7 @@ final class JsonSyntax {
     static String expected(String parserMessage, String json, JsonLocation at) {
         String word = wordAt(json, at).toLowerCase(Locale.ROOT);
         if (!word.isEmpty() && ("|" + NAN_WORDS + "|").contains("|" + word + "|")) {
-            return SITUATIONS.get(0).expected();
+            return NOT_A_NUMBER;
         }
         String message = parserMessage == null ? "" : parserMessage;
         for (Situation s : SITUATIONS) {
@@ -114,6 +122,19 @@ final class JsonSyntax {
             end++;
         }
         return json.substring(start, end);
+    }
+
+    /** The location of the first character of the word at {@code at} (the parser reports the end of a bad token). */
+    private static JsonLocation startOfWord(String json, JsonLocation at) {
+        if (at == null || at.getCharOffset() < 0) {
+            return at;
+        }
+        int i = (int) Math.min(at.getCharOffset(), json.length());
+        int start = i;
+        while (start > 0 && wordChar(json.charAt(start - 1))) {
+            start--;
+        }
+        return new JsonLocation(at.contentReference(), start, at.getLineNr(), Math.max(1, at.getColumnNr() - (i - start)));
     }
 
     private static boolean wordChar(char c) {

@@ -23,7 +23,7 @@ import org.junit.jupiter.api.Test;
 class EvaluationServiceTest {
 
     /** The axial example with resistors in place of the battery: every point is solved directly. */
-    private static EvaluationRequest resistiveAxial() throws IOException {
+    static EvaluationRequest resistiveAxial() throws IOException {
         try (InputStream in = EvaluationServiceTest.class.getClassLoader().getResourceAsStream("examples/axial-wind-24v.json")) {
             EvaluationRequest d = Json.mapper().readValue(in, DesignDocument.class).design();
             return new EvaluationRequest(d.alternator(), new ResistiveLoad(2.0, Cable.NONE), new SpeedRange(0, 500, 11), 0, 0);
@@ -82,6 +82,15 @@ class EvaluationServiceTest {
         InvalidInputException e = assertThrows(InvalidInputException.class, () -> new EvaluationService().evaluate(bad));
         assertEquals("alternator.winding.parallelPaths", e.errors().get(0).field());
         assertTrue(e.errors().get(0).message().startsWith("alternator.winding.parallelPaths = 3:"), e.getMessage());
+    }
+
+    @Test
+    void evaluations_share_the_cache_they_are_given() throws IOException {
+        ResultCache cache = new ResultCache(ResultCache.DEFAULT_BUDGET_BYTES);
+        AlternatorEvaluation first = new EvaluationService(cache).evaluate(resistiveAxial());
+        AlternatorEvaluation second = new EvaluationService(cache).evaluate(resistiveAxial());
+        assertSame(first, second, "a second service over the same cache answers from it");
+        assertEquals(1, cache.size());
     }
 
     @Test

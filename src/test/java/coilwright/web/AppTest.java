@@ -11,6 +11,7 @@ import static org.hamcrest.Matchers.not;
 import static org.hamcrest.Matchers.startsWith;
 
 import coilwright.validation.InfeasibleDesignException;
+import coilwright.validation.SolverFailedException;
 import java.util.Map;
 import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
@@ -37,6 +38,10 @@ class AppTest {
                     }),
                     Route.get("/api/v1/test/infeasible", ctx -> {
                         throw new InfeasibleDesignException("winding.slots", "12 slots and 12 poles cannot be balanced");
+                    }),
+                    Route.get("/api/v1/test/solver", ctx -> {
+                        throw new SolverFailedException("speedRange.maxRpm",
+                                "the bridge solver did not converge at 1450 rpm: lower the top speed");
                     }),
                     Route.get("/test/page-boom", ctx -> {
                         throw new IllegalStateException("secret internal detail");
@@ -121,6 +126,15 @@ class AppTest {
                 .body("errors", hasSize(3))
                 .body("errors.field", hasItems("rotor.airGapM", "rotor.magnet.grade", "stator.coils[0].turns"))
                 .body("errors.find { it.field == 'rotor.magnet.grade' }.allowed", equalTo("one of N35, N42, N52"));
+    }
+
+    @Test
+    void a_solver_failure_is_a_422_problem_naming_the_field_and_what_to_change() {
+        given().get("/api/v1/test/solver").then().statusCode(422)
+                .contentType(startsWith("application/problem+json"))
+                .body("type", equalTo("/problems/solver-failed"))
+                .body("detail", equalTo("the bridge solver did not converge at 1450 rpm: lower the top speed"))
+                .body("field", equalTo("speedRange.maxRpm"));
     }
 
     @Test
