@@ -16,6 +16,7 @@ import java.util.Map;
 import java.util.concurrent.TimeUnit;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
+import org.junit.jupiter.api.Tag;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -31,6 +32,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
  * current is read from the inductor branch; the single-phase source is grounded at one terminal.
  * In CI (environment variable CI set) a missing ngspice fails the test; elsewhere it is skipped.
  */
+@Tag("slow")
 class BridgeNgspiceReferenceTest {
     private static final Path NGSPICE = Path.of("/usr/bin/ngspice");
     private static final Pattern MEAS = Pattern.compile("^\\s*(idc|iarms)\\s*=\\s*([-+0-9.eE]+)", Pattern.MULTILINE);

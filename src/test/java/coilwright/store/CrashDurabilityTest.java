@@ -15,6 +15,7 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.concurrent.TimeUnit;
+import org.junit.jupiter.api.Tag;
 
 import static org.junit.jupiter.api.Assertions.*;
 
@@ -24,6 +25,7 @@ import static org.junit.jupiter.api.Assertions.*;
  * ({@link ProcessHandle#destroyForcibly()} on Linux), reopens the file and finds every printed save intact.
  */
 @EnabledOnOs({OS.LINUX, OS.MAC})
+@Tag("slow")
 class CrashDurabilityTest {
     private static final int ACKS_BEFORE_KILL = 300;
 

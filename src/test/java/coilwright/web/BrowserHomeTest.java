@@ -8,8 +8,10 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.extension.RegisterExtension;
 import org.openqa.selenium.By;
 import org.openqa.selenium.WebElement;
+import org.junit.jupiter.api.Tag;
 
 /** Drives real headless Chromium against the running app, reading the page as a person would. */
+@Tag("slow")
 class BrowserHomeTest {
     @RegisterExtension
     static final TestApp APP = new TestApp();

@@ -17,11 +17,13 @@ import org.openqa.selenium.OutputType;
 import org.openqa.selenium.WebElement;
 import org.openqa.selenium.chrome.ChromeDriver;
 import org.openqa.selenium.support.ui.Select;
+import org.junit.jupiter.api.Tag;
 
 /**
  * A person entering a design in real headless Chromium: choosing from the selects, typing numbers, pressing
  * Calculate, and reading the result. Screenshots go to {@code target/screenshots/} for a look by eye.
  */
+@Tag("slow")
 class BrowserDesignTest {
     @RegisterExtension
     static final TestApp APP = new TestApp();

@@ -9,8 +9,10 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.extension.RegisterExtension;
 import org.openqa.selenium.By;
 import org.openqa.selenium.WebElement;
+import org.junit.jupiter.api.Tag;
 
 /** A rewinder fills the /rewind form in real headless Chromium, without JavaScript doing anything for them. */
+@Tag("slow")
 class BrowserRewindTest {
     @RegisterExtension
     static final TestApp APP = new TestApp();

@@ -12,6 +12,7 @@ import java.nio.file.Path;
 import java.util.List;
 import java.util.concurrent.CopyOnWriteArrayList;
 import java.util.concurrent.atomic.AtomicBoolean;
+import org.junit.jupiter.api.Tag;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -21,6 +22,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
  * after a restart on the same data directory every save it had acknowledged (answered 201) is there, intact.
  */
 @EnabledOnOs({OS.LINUX, OS.MAC})
+@Tag("slow")
 class SavedDesignCrashTest {
     private static final int ACKS_BEFORE_KILL = 25;
 

@@ -13,6 +13,7 @@ import java.sql.DriverManager;
 import java.sql.SQLException;
 import java.sql.Statement;
 import java.util.HexFormat;
+import org.junit.jupiter.api.Tag;
 
 import static io.restassured.RestAssured.given;
 import static org.hamcrest.Matchers.equalTo;
@@ -23,6 +24,7 @@ import static org.hamcrest.Matchers.hasSize;
  * and dropped here and named in the URL ({@code currentSchema}). Skipped when PostgreSQL is unreachable, failed
  * instead when CI=true.
  */
+@Tag("slow")
 class SavedDesignPostgresTest {
     private static final String URL = "jdbc:postgresql://127.0.0.1:5432/test";
 

@@ -15,12 +15,14 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
+import org.junit.jupiter.api.Tag;
 
 import static io.restassured.RestAssured.given;
 import static org.hamcrest.Matchers.equalTo;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 
 /** Demo designs appear once, and saved links keep working, across restarts on the same data directory. */
+@Tag("slow")
 class SavedDesignRestartTest {
     @TempDir
     Path dataDir;
