@@ -1,13 +1,13 @@
 package coilwright.web;
 
-import coilwright.web.units.Units;
-import coilwright.web.units.Quantity;
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.JsonNodeFactory;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import coilwright.validation.InfeasibleDesignException;
 import coilwright.validation.InvalidInputException;
+import coilwright.web.units.Quantity;
+import coilwright.web.units.Units;
 import java.lang.reflect.ParameterizedType;
 import java.lang.reflect.RecordComponent;
 import java.lang.reflect.Type;

@@ -1,7 +1,7 @@
 package coilwright.web;
 
-import coilwright.web.units.Units;
 import coilwright.web.units.Quantity;
+import coilwright.web.units.Units;
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.node.JsonNodeFactory;
 import java.math.BigDecimal;

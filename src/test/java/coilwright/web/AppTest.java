@@ -1,6 +1,5 @@
 package coilwright.web;
 
-import coilwright.web.units.Units;
 import static io.restassured.RestAssured.given;
 import static org.hamcrest.Matchers.containsString;
 import static org.hamcrest.Matchers.equalTo;
@@ -9,9 +8,14 @@ import static org.hamcrest.Matchers.hasSize;
 import static org.hamcrest.Matchers.matchesPattern;
 import static org.hamcrest.Matchers.not;
 import static org.hamcrest.Matchers.startsWith;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertEquals;
 
 import coilwright.validation.InfeasibleDesignException;
 import coilwright.validation.SolverFailedException;
+import coilwright.web.units.Units;
+import java.util.List;
 import java.util.Map;
 import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
@@ -170,19 +174,20 @@ class AppTest {
 
     @Test
     void unknown_page_is_an_html_404_page_in_the_layout() {
-        given().get("/no-such-page").then().statusCode(404)
-                .contentType(startsWith("text/html"))
-                .body(containsString("Not Found")).body(containsString("Coilwright"))
-                .body(containsString("There is nothing at /no-such-page."));
+        Html page = Html.of(given().get("/no-such-page").then().statusCode(404)
+                .contentType(startsWith("text/html")).extract().response());
+        assertEquals("404 Not Found", page.doc().selectFirst("h1").text());
+        assertEquals("Coilwright", page.doc().selectFirst("header .brand").text());
+        assertEquals("There is nothing at /no-such-page.", page.doc().selectFirst(".detail").text());
     }
 
     @Test
     void unexpected_error_on_a_page_is_an_html_500_page_without_internals() {
-        given().get("/test/page-boom").then().statusCode(500)
-                .contentType(startsWith("text/html"))
-                .body(containsString("Reference:"))
-                .body(not(containsString("secret internal detail")))
-                .body(not(containsString("IllegalStateException")));
+        Html page = Html.of(given().get("/test/page-boom").then().statusCode(500)
+                .contentType(startsWith("text/html")).extract().response());
+        assertTrue(page.doc().selectFirst(".log-id").text().matches("Reference: [0-9a-f]{8}"), page.text());
+        assertFalse(page.text().contains("secret internal detail"));
+        assertFalse(page.doc().html().contains("IllegalStateException"));
     }
 
     @Test
@@ -193,19 +198,21 @@ class AppTest {
 
     @Test
     void home_page_renders_with_nav_and_safety_note() {
-        given().get("/").then().statusCode(200).contentType(startsWith("text/html"))
-                .body(containsString("<a href=\"/design/new\""))
-                .body(containsString("Winding layout"))
-                .body(containsString("electrical installation must follow local codes and licensed practice"))
-                .body(containsString("href=\"/static/css/coilwright.css\""))
-                .body(not(containsString("http://"))).body(not(containsString("https://")));
+        Html page = Html.of(given().get("/").then().statusCode(200).contentType(startsWith("text/html")).extract().response());
+        List<String> nav = page.all("nav.site-nav a").eachText();
+        assertTrue(nav.containsAll(List.of("New design", "Winding layout", "Wind match", "Hydro match", "Rewind")), nav.toString());
+        assertEquals("/design/new", page.all("nav.site-nav a").get(1).attr("href"));
+        assertTrue(page.doc().selectFirst("footer .safety").text()
+                .contains("electrical installation must follow local codes and licensed practice"));
+        assertEquals(List.of("/static/css/coilwright.css"), page.all("link[rel=stylesheet]").eachAttr("href"));
+        assertTrue(page.all("[src^=http], [href^=http]").isEmpty(), "nothing is fetched from elsewhere");
     }
 
     @Test
     void a_units_choice_is_remembered_in_a_cookie() {
         given().queryParam("units", "imperial").get("/").then().statusCode(200)
                 .cookie(Units.COOKIE, "imperial");
-        given().cookies(Map.of(Units.COOKIE, "imperial")).get("/").then()
-                .body(containsString("class=\"current\">imperial</a>"));
+        Html page = Html.of(given().cookies(Map.of(Units.COOKIE, "imperial")).get("/").then().extract().response());
+        assertEquals("imperial", page.doc().selectFirst(".units-switch a.current").text());
     }
 }

@@ -2,8 +2,8 @@ package coilwright.web;
 
 import coilwright.validation.InfeasibleDesignException;
 import coilwright.validation.InvalidInputException;
-import coilwright.web.units.Units;
 import coilwright.web.units.Quantity;
+import coilwright.web.units.Units;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertThrows;

@@ -2,12 +2,14 @@ package coilwright.web.match;
 
 import coilwright.service.ExampleCatalogue;
 import coilwright.service.MatchingService;
+import coilwright.system.EvaluationRequest;
 import coilwright.system.HydroMatchRequest;
 import coilwright.system.HydroMatchResult;
 import coilwright.system.RunnerKind;
 import coilwright.system.WindMatchRequest;
 import coilwright.system.WindMatchResult;
 import coilwright.web.Choice;
+import coilwright.web.Figure;
 import coilwright.web.FormBinder;
 import coilwright.web.FormPage;
 import coilwright.web.FormResult;
@@ -15,6 +17,7 @@ import coilwright.web.NotFoundException;
 import coilwright.web.RecordBinder;
 import io.javalin.http.Context;
 import java.util.HashMap;
+import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 
@@ -35,42 +38,46 @@ public final class MatchPages {
     }
 
     public void windForm(Context ctx) {
-        String slug = example(ctx, "axial-wind-24v");
-        ctx.render("match-wind", model(FormResult.showing(FormBinder.flatten(WindPageForm.defaults(slug)))));
+        ctx.render("match-wind", model(starting(WindPageForm.defaults(example(ctx, "axial-wind-24v")))));
     }
 
     public void windResult(Context ctx) {
         open(ctx, "match-wind");
         WindPageForm f = forms.bind(ctx.formParamMap(), WindPageForm.class);
-        ExampleCatalogue.Example example = examples.require("example", f.example());
-        WindMatchRequest req = new WindMatchRequest(example.document().design().alternator(),
-                example.document().design().load(), f.rotor().toRotor(), f.site(), f.wind(), 25.0);
+        EvaluationRequest design = examples.require("example", f.example()).document().design();
+        WindMatchRequest req = new WindMatchRequest(design.alternator(), design.load(), f.rotor().toRotor(), f.site(),
+                f.wind(), 25.0);
         WindMatchResult result = matching.wind(req);
-        Map<String, Object> model = model(FormResult.showing(FormPage.posted(ctx)));
-        model.put("result", result);
-        model.put("summary", MatchSummary.wind(result));
-        model.put("matchingChart", MatchCharts.windMatching(req.rotor(), result));
-        model.put("powerChart", MatchCharts.windPowerCurve(result));
-        ctx.render("match-wind", model);
+        ctx.render("match-wind", resultModel(ctx, result, MatchSummary.wind(result), Map.of(
+                "matchingChart", MatchCharts.windMatching(req.rotor(), result),
+                "powerChart", MatchCharts.windPowerCurve(result))));
     }
 
     public void hydroForm(Context ctx) {
-        String slug = example(ctx, "radial-hydro-48v");
-        ctx.render("match-hydro", model(FormResult.showing(FormBinder.flatten(HydroPageForm.defaults(slug)))));
+        ctx.render("match-hydro", model(starting(HydroPageForm.defaults(example(ctx, "radial-hydro-48v")))));
     }
 
     public void hydroResult(Context ctx) {
         open(ctx, "match-hydro");
         HydroPageForm f = forms.bind(ctx.formParamMap(), HydroPageForm.class);
-        ExampleCatalogue.Example example = examples.require("example", f.example());
-        HydroMatchResult result = matching.hydro(new HydroMatchRequest(example.document().design().alternator(),
-                example.document().design().load(), f.site(), f.penstock(), f.runner(), f.driveRatio(),
-                f.drivetrainEfficiency(), f.waterTempC()));
+        EvaluationRequest design = examples.require("example", f.example()).document().design();
+        HydroMatchResult result = matching.hydro(new HydroMatchRequest(design.alternator(), design.load(), f.site(),
+                f.penstock(), f.runner(), f.driveRatio(), f.drivetrainEfficiency(), f.waterTempC()));
+        ctx.render("match-hydro", resultModel(ctx, result, MatchSummary.hydro(result),
+                Map.of("matchingChart", MatchCharts.hydroMatching(result))));
+    }
+
+    private static FormResult starting(Record defaults) {
+        return FormResult.showing(FormBinder.flatten(defaults));
+    }
+
+    /** The page with the form as posted, the result, its summary figures and its charts. */
+    private Map<String, Object> resultModel(Context ctx, Record result, List<Figure> summary, Map<String, String> charts) {
         Map<String, Object> model = model(FormResult.showing(FormPage.posted(ctx)));
         model.put("result", result);
-        model.put("summary", MatchSummary.hydro(result));
-        model.put("matchingChart", MatchCharts.hydroMatching(result));
-        ctx.render("match-hydro", model);
+        model.put("summary", summary);
+        model.putAll(charts);
+        return model;
     }
 
     /** The example a form page starts from: the query's, else the page's default. */

@@ -1,6 +1,5 @@
 package coilwright.web.pages;
 
-import coilwright.web.units.Units;
 import coilwright.conductor.Cooling;
 import coilwright.conductor.ThermalClass;
 import coilwright.conductor.WireSpec;
@@ -22,6 +21,7 @@ import coilwright.magnet.RadialSurfaceRotor;
 import coilwright.magnet.RotorSide;
 import coilwright.system.EvaluationRequest;
 import coilwright.system.SpeedRange;
+import coilwright.web.units.Units;
 import coilwright.winding.Layers;
 import coilwright.winding.WindingSpec;
 import java.util.HashMap;

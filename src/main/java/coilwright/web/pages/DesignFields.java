@@ -1,7 +1,7 @@
 package coilwright.web.pages;
 
-import coilwright.web.units.Units;
 import coilwright.web.units.Shown;
+import coilwright.web.units.Units;
 import java.util.LinkedHashMap;
 import java.util.Map;
 

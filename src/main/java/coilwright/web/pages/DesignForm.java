@@ -1,7 +1,5 @@
 package coilwright.web.pages;
 
-import coilwright.web.units.Units;
-import coilwright.web.units.Shown;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import coilwright.load.BatteryLoad;
 import coilwright.load.ResistiveLoad;
@@ -11,6 +9,8 @@ import coilwright.validation.InvalidInputException;
 import coilwright.web.FormBinder;
 import coilwright.web.Json;
 import coilwright.web.RecordBinder;
+import coilwright.web.units.Shown;
+import coilwright.web.units.Units;
 import java.util.Arrays;
 import java.util.HashMap;
 import java.util.LinkedHashMap;

@@ -1,6 +1,5 @@
 package coilwright.web.pages;
 
-import coilwright.web.units.Units;
 import coilwright.conductor.Cooling;
 import coilwright.conductor.ThermalClass;
 import coilwright.conductor.WireGauge;
@@ -12,6 +11,7 @@ import coilwright.machine.Connection;
 import coilwright.magnet.MagnetGrades;
 import coilwright.web.Choice;
 import coilwright.web.FormResult;
+import coilwright.web.units.Units;
 import coilwright.winding.Layers;
 import java.net.URLEncoder;
 import java.nio.charset.StandardCharsets;

@@ -1,9 +1,9 @@
 package coilwright.web.pages;
 
-import coilwright.web.units.Units;
-import coilwright.web.units.Shown;
 import coilwright.system.AlternatorEvaluation;
 import coilwright.system.SpeedPoint;
+import coilwright.web.units.Shown;
+import coilwright.web.units.Units;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;

@@ -1,10 +1,10 @@
 package coilwright.web.pages;
 
-import coilwright.web.units.Units;
-import coilwright.web.units.Shown;
 import coilwright.safety.Caution;
 import coilwright.system.AlternatorEvaluation;
 import coilwright.system.EvaluationRequest;
+import coilwright.web.units.Shown;
+import coilwright.web.units.Units;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Locale;

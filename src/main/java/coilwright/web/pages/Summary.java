@@ -1,14 +1,14 @@
 package coilwright.web.pages;
 
-import coilwright.web.Figure;
-import coilwright.web.units.Units;
-import coilwright.web.units.Shown;
 import coilwright.conductor.CurrentDensity;
 import coilwright.conductor.FillCheck;
 import coilwright.load.ResistiveLoad;
 import coilwright.system.AlternatorEvaluation;
 import coilwright.system.EvaluationRequest;
 import coilwright.system.SpeedPoint;
+import coilwright.web.Figure;
+import coilwright.web.units.Shown;
+import coilwright.web.units.Units;
 import java.util.List;
 import java.util.Locale;
 

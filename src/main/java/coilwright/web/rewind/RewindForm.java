@@ -1,8 +1,8 @@
 package coilwright.web.rewind;
 
-import coilwright.web.units.Units;
 import coilwright.web.units.Quantity;
 import coilwright.web.units.Shown;
+import coilwright.web.units.Units;
 import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.LinkedHashMap;

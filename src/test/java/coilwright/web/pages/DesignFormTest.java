@@ -1,6 +1,5 @@
 package coilwright.web.pages;
 
-import coilwright.web.units.Units;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertInstanceOf;
@@ -14,6 +13,7 @@ import coilwright.magnet.RotorSide;
 import coilwright.system.EvaluationRequest;
 import coilwright.validation.InvalidInputException;
 import coilwright.web.FieldErrors;
+import coilwright.web.units.Units;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
