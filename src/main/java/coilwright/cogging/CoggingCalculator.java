@@ -31,6 +31,27 @@ public final class CoggingCalculator {
     private CoggingCalculator() {
     }
 
+    /** The field model of one periodic section (t = gcd(Q, p) sections per machine). */
+    static SubdomainField field(CoggingInput in) {
+        int t = ArithmeticUtils.gcd(in.slots(), in.poles() / 2);
+        return new SubdomainField(in.slots() / t, in.poles() / t, 2 * Math.PI * midGapRadiusM(in) / t,
+                in.slotOpeningM(), in.airGapM(), in.magnetThicknessM(), in.poleArcRatio(), in.remanenceT(),
+                in.recoilPermeability());
+    }
+
+    /**
+     * Cogging torque without skew at a rotor angle from the position where a pole centre faces a slot centre, N m.
+     */
+    static double unskewedTorqueNm(CoggingInput in, SubdomainField field, double rotorAngleRad) {
+        int t = ArithmeticUtils.gcd(in.slots(), in.poles() / 2);
+        double r = midGapRadiusM(in);
+        return -field.forcePerDepth(rotorAngleRad * r) * r * in.stackLengthM() * t;
+    }
+
+    private static double midGapRadiusM(CoggingInput in) {
+        return in.gapDiameterM() / 2 + (in.side() == RotorSide.INNER ? -1 : 1) * in.airGapM() / 2;
+    }
+
     /** An air-cored stator: no teeth, so no cogging. */
     public static CoggingTorque airCored() {
         return CoggingTorque.none("air-cored stator: there are no iron teeth for the magnets to align with, so "
@@ -40,22 +61,15 @@ public final class CoggingCalculator {
     /** Cogging of a slotted surface-magnet machine. */
     public static CoggingTorque radial(CoggingInput in) {
         int q = in.slots();
-        int p = in.poles() / 2;
         int lcm = ArithmeticUtils.lcm(q, in.poles());
         if (in.slotOpeningM() == 0) {
             return CoggingTorque.none("closed slots (zero slot opening): the stator surface facing the magnets is "
                     + "smooth, so there is no cogging torque in this model");
         }
-        int t = ArithmeticUtils.gcd(q, p);
-        double rMid = in.gapDiameterM() / 2 + (in.side() == RotorSide.INNER ? -1 : 1) * in.airGapM() / 2;
-        double section = 2 * Math.PI * rMid / t;
-        SubdomainField field = new SubdomainField(q / t, in.poles() / t, section, in.slotOpeningM(), in.airGapM(),
-                in.magnetThicknessM(), in.poleArcRatio(), in.remanenceT(), in.recoilPermeability());
-        double periodM = 2 * Math.PI * rMid / lcm;
-        double toTorque = rMid * in.stackLengthM() * t;
+        SubdomainField field = field(in);
         double[] torque = new double[POSITIONS_PER_PERIOD];
         for (int i = 0; i < POSITIONS_PER_PERIOD; i++) {
-            torque[i] = -field.forcePerDepth(periodM * i / POSITIONS_PER_PERIOD) * toTorque;
+            torque[i] = unskewedTorqueNm(in, field, 2 * Math.PI / lcm * i / POSITIONS_PER_PERIOD);
         }
         double skewRad = in.skewSlotPitches() * 2 * Math.PI / q;
         List<CoggingHarmonic> harmonics = new ArrayList<>();
