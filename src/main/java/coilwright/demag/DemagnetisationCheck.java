@@ -96,9 +96,17 @@ public record DemagnetisationCheck(double magnetTempC, double intrinsicCoercivit
 
     /** Normal flux density at the magnet face averaged over the outer strip of its width, T. */
     static double edgeFluxDensityT(MagnetCircuit c, double br) {
+        double half = c.poleArcRatio() * c.polePitchM() / 2;
+        return faceFluxDensityT(c, br, half - EDGE_STRIP * 2 * half, half);
+    }
+
+    /**
+     * Normal flux density at the magnet face averaged from {@code fromM} to {@code toM} (distances from the pole
+     * centre), T: the 2-D solution's harmonics grown from the facing surface to the magnet face by cosh(k g).
+     */
+    static double faceFluxDensityT(MagnetCircuit c, double br, double fromM, double toM) {
         double tau = c.polePitchM();
-        double half = c.poleArcRatio() * tau / 2;
-        double strip = EDGE_STRIP * 2 * half;
+        double width = toM - fromM;
         double sum = 0;
         for (int v = 1; v <= MAX_ORDER; v += 2) {
             double k = v * Math.PI / tau;
@@ -108,8 +116,7 @@ public record DemagnetisationCheck(double magnetTempC, double intrinsicCoercivit
             if (!Double.isFinite(atFace)) {
                 break;
             }
-            double mean = (Math.sin(k * half) - Math.sin(k * (half - strip))) / (k * strip);
-            sum += atFace * mean;
+            sum += atFace * (Math.sin(k * toM) - Math.sin(k * fromM)) / (k * width);
         }
         return sum;
     }
