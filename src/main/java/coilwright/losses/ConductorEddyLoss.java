@@ -84,7 +84,6 @@ public final class ConductorEddyLoss {
         double halfGap = rotor.magneticGapM() / 2;
         double h = rotor.statorThicknessM();
         double conductors = 2.0 * coils * turnsPerCoil * strandsInHand;
-        double[] fundamentalShare = {0};
         UnivariateFunction meanSquare = r -> {
             double tau = 2 * Math.PI * r / poles;
             double alpha = Math.min(1.0, rotor.magnetWidthM() / tau);
@@ -111,11 +110,11 @@ public final class ConductorEddyLoss {
                     rotor.magnetThicknessM(), halfGap, 0.0);
             return b1 * b1 * Math.sinh(k * h) / (k * h);
         };
-        fundamentalShare[0] = integral > 0 ? integrator.integrate(100_000, first, rotor.innerRadiusM(),
+        double fundamentalShare = integral > 0 ? integrator.integrate(100_000, first, rotor.innerRadiusM(),
                 rotor.outerRadiusM()) / integral : 1.0;
         double f = omega / (2 * Math.PI);
         double skin = f > 0 ? skinDepthM(f, rho) : Double.MAX_VALUE;
-        return new AirCoredEddyLoss(total, fundamentalShare[0], strandDiameterM, strandsInHand,
+        return new AirCoredEddyLoss(total, fundamentalShare, strandDiameterM, strandsInHand,
                 Math.min(skin, 1.0), strandDiameterM < skin);
     }
 
