@@ -27,6 +27,8 @@ final class SubdomainField {
     private static final int MIN_SLOT_HARMONICS = 6;
     private static final int MAX_SLOT_HARMONICS = 30;
     private static final int MAX_GAP_HARMONICS = 3000;
+    /** Gap harmonics per section length over opening width: resolves the opening to about a fourteenth. */
+    private static final double GAP_HARMONICS_PER_OPENING = 14;
 
     private final int slots;       // S, slots in the section
     private final int poles;       // poles in the section (even)
@@ -72,7 +74,8 @@ final class SubdomainField {
         this.gap = gapM;
         this.remanence = remanenceT;
         this.magnetWidth = poleArcRatio * periodM / poles;
-        int gapHarmonics = (int) Math.min(MAX_GAP_HARMONICS, Math.max(16.0 * poles, Math.ceil(14 * periodM / openingM)));
+        int gapHarmonics = (int) Math.min(MAX_GAP_HARMONICS,
+                Math.max(16.0 * poles, Math.ceil(GAP_HARMONICS_PER_OPENING * periodM / openingM)));
         int slotHarmonics = (int) Math.max(MIN_SLOT_HARMONICS, Math.min(MAX_SLOT_HARMONICS,
                 Math.ceil(2.0 * openingM * gapHarmonics / periodM)));
         boolean cut = slots * slotHarmonics > MAX_UNKNOWNS;

@@ -6,8 +6,8 @@
  * 2010), written in Cartesian form over one periodic section (curvature neglected, as in the magnet package's field
  * model): Fourier series for the vector potential in the magnets, the air gap and each slot opening, joined by
  * continuity over the openings, solved once per design (Commons Math LU) and for many rotor positions. Torque from
- * the Maxwell stress in the gap; skew as a sin(x)/x factor on each harmonic (Zhu &amp; Howe, IEEE Trans. Energy Convers.
- * 15(4), 2000).
+ * the Maxwell stress in the gap; skew as a sin(x)/x factor on each harmonic (Zhu &amp; Howe, IEEE Trans. Energy
+ * Convers. 15(4), 2000).
  *
  * <p><b>Checks.</b> A test-only finite-element solution of the same idealised geometry agrees within about 5 %
  * (its own grid converging from below); the optimum magnet arc of an integral-slot machine falls at about

@@ -16,9 +16,11 @@ import java.util.Locale;
  *     taken to oppose the magnet (the worst alignment);</li>
  * <li>its field in the magnet from the magnetic circuit: H_a = F / (n_m (l_m + mu_r g)), with g the Carter-scaled
  *     gap or the dual rotor's half gap and n_m the magnets the MMF acts across;</li>
- * <li>the magnet's own open-circuit field at its most exposed part, the outer tenth of its width at the face
- *     (where leakage to the neighbouring pole is strongest), from the 2-D harmonic solution: B_y at the magnet face
- *     is sum B_v cosh(k g) cos(k x), averaged over that strip, and H = (B_y - Br(T)) / (mu0 mu_r);</li>
+ * <li>the magnet's own open-circuit field at its most exposed part, from the 2-D harmonic solution: B_y at the
+ *     magnet face is sum B_v cosh(k g) cos(k x), averaged over the outer tenth of the magnet width (where the field
+ *     fringes to the neighbouring pole) and over a strip as wide at the pole centre, and H = (B_y - Br(T)) /
+ *     (mu0 mu_r) taken where it opposes most (the edge for a small gap, the centre when a large gap leaves the
+ *     magnet's sides a shorter path to its neighbours than across the gap);</li>
  * <li>the sum compared with the knee of the intrinsic curve at that temperature, H_k = 0.9 HcJ(T) (a squareness
  *     H_k / HcJ of about 0.9 for sintered NdFeB and hard ferrite; from memory).</li>
  * </ol>
@@ -27,7 +29,8 @@ import java.util.Locale;
  * @param magnetTempC               magnet temperature checked, C
  * @param intrinsicCoercivityKAPerM HcJ at that temperature, kA/m
  * @param kneeFieldKAPerM           H_k, kA/m (opposing field the magnet tolerates)
- * @param openCircuitFieldKAPerM    opposing field at the magnet's exposed edge without current, kA/m
+ * @param openCircuitFieldKAPerM    opposing field at the magnet's most exposed part (edge or centre) without current,
+ *                                  kA/m
  * @param armatureFieldKAPerM       opposing field of the fault current, kA/m
  * @param worstFieldKAPerM          their sum, kA/m
  * @param shortCircuit              the fault current
@@ -47,7 +50,8 @@ public record DemagnetisationCheck(double magnetTempC, double intrinsicCoercivit
     private static final double MU0 = 4e-7 * Math.PI;
     private static final int MAX_ORDER = 401;
     static final String METHOD = "sudden 3-phase short circuit at the highest speed (IEC 60909 peak factor); "
-            + "winding MMF fully opposing; 2-D open-circuit field at the magnet's edge; knee at 0.9 HcJ(T)";
+            + "winding MMF fully opposing; 2-D open-circuit field at the magnet's edge or centre, whichever is worse; "
+            + "knee at 0.9 HcJ(T)";
 
     /**
      * The check at one magnet temperature.
@@ -77,7 +81,8 @@ public record DemagnetisationCheck(double magnetTempC, double intrinsicCoercivit
                 / poles;
         double armature = mmfA / (circuit.magnetsPerPole() * (lm + mu * gap));
         double br = g.remanenceAt(magnetTempC);
-        double openCircuit = (br - edgeFluxDensityT(circuit, br)) / (MU0 * mu);
+        double openCircuit = (br - Math.min(edgeFluxDensityT(circuit, br), centreFluxDensityT(circuit, br)))
+                / (MU0 * mu);
         double hcj = g.intrinsicCoercivityAt(magnetTempC);
         double knee = SQUARENESS * hcj;
         double worst = (openCircuit + armature) / 1000;
@@ -98,6 +103,12 @@ public record DemagnetisationCheck(double magnetTempC, double intrinsicCoercivit
     static double edgeFluxDensityT(MagnetCircuit c, double br) {
         double half = c.poleArcRatio() * c.polePitchM() / 2;
         return faceFluxDensityT(c, br, half - EDGE_STRIP * 2 * half, half);
+    }
+
+    /** Normal flux density at the magnet face averaged over a strip of the same width at the pole centre, T. */
+    static double centreFluxDensityT(MagnetCircuit c, double br) {
+        double strip = EDGE_STRIP * c.poleArcRatio() * c.polePitchM();
+        return faceFluxDensityT(c, br, -strip / 2, strip / 2);
     }
 
     /**

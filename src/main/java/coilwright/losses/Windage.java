@@ -19,7 +19,8 @@ public final class Windage {
     /**
      * A disc rotating in an unbounded fluid, both faces wetted: M = 0.5 rho omega^2 R^5 C_M with
      * C_M = 3.87 Re^-1/2 (laminar; Cochran's 1934 solution of von Karman's 1921 equations) below Re = 3e5 and
-     * C_M = 0.146 Re^-1/5 (turbulent; von Karman 1921) above, Re = omega R^2 / nu (as collected by Owen &amp; Rogers 1989).
+     * C_M = 0.146 Re^-1/5 (turbulent; von Karman 1921) above, Re = omega R^2 / nu (as collected by Owen &amp;
+     * Rogers 1989).
      *
      * @param radiusM                disc radius R, m, &gt; 0
      * @param omegaRadS              angular speed, rad/s, &gt;= 0
@@ -56,8 +57,10 @@ public final class Windage {
         }
         double re = omegaRadS * radiusM * radiusM / kinematicViscosityM2s;
         double g = axialClearanceM / radiusM;
-        double cm = Math.max(Math.max(2 * Math.PI / (g * re), 3.70 * Math.pow(g, 0.1) / Math.sqrt(re)),
-                Math.max(0.080 * Math.pow(g, -1.0 / 6) * Math.pow(re, -0.25), 0.102 * Math.pow(g, 0.1) * Math.pow(re, -0.2)));
+        double laminar = Math.max(2 * Math.PI / (g * re), 3.70 * Math.pow(g, 0.1) / Math.sqrt(re));
+        double turbulent = Math.max(0.080 * Math.pow(g, -1.0 / 6) * Math.pow(re, -0.25),
+                0.102 * Math.pow(g, 0.1) * Math.pow(re, -0.2));
+        double cm = Math.max(laminar, turbulent);
         return 0.5 * densityKgM3 * omegaRadS * omegaRadS * Math.pow(radiusM, 5) * cm;
     }
 

@@ -6,8 +6,8 @@
  * k_h f B^a, classical eddy pi^2 d^2 (f B)^2 / (6 rho_e delta) from the sheet thickness and resistivity, and excess
  * k_e (f B)^1.5 set to equal the classical loss at 1.5 T, 50 Hz; k_h and a fit the two guaranteed maxima of
  * EN 10106 / IEC 60404-8-4 (1.0 and 1.5 T at 50 Hz; the grade name states the 1.5 T figure). The fit reproduces the
- * standard's 60 Hz maxima within about 1.5 % (see ElectricalSteelsReferenceTest). {@link coilwright.losses.ElectricalSteels}
- * lists M270-35A to M1000-65A and a conservative "unknown motor lamination" (11 W/kg at 1.5 T). Tooth and yoke flux
+ * standard's 60 Hz maxima within about 1.5 % (see ElectricalSteelsReferenceTest).
+ * {@link coilwright.losses.ElectricalSteels} lists M270-35A to M1000-65A and a conservative "unknown motor lamination" (11 W/kg at 1.5 T). Tooth and yoke flux
  * densities come from the gap field ({@link coilwright.losses.CoreFlux}); {@link coilwright.losses.IronLoss} applies
  * the separation at f = p n / 60 with a build factor (default 1.5) for punching, pressing and non-sinusoidal flux.
  * Uncertainty about +-30 %.

@@ -44,6 +44,18 @@ class DemagnetisationCheckTest {
     }
 
     @Test
+    void with_a_large_gap_the_centre_of_a_dual_rotor_magnet_is_the_weak_point() {
+        AxialDualRotor a = new AxialDualRotor("N42", 0.04, 0.05, 0.16, 0.01, 0.018, 0.0015);
+        MagnetCircuit c = MagnetCircuit.axial(a, 16);
+        double br = 1.3;
+        assertTrue(DemagnetisationCheck.centreFluxDensityT(c, br) < DemagnetisationCheck.edgeFluxDensityT(c, br));
+        DemagnetisationCheck d = DemagnetisationCheck.of(c, 20, 3, 16, 192, 0.866, ShortCircuitCurrent.of(0, 0.5, 1));
+        double centre = (MagnetGrades.byName("N42").remanenceAt(20) - DemagnetisationCheck.centreFluxDensityT(c,
+                MagnetGrades.byName("N42").remanenceAt(20))) / (4e-7 * Math.PI * 1.05) / 1000;
+        assertEquals(centre, d.openCircuitFieldKAPerM(), 1e-9);
+    }
+
+    @Test
     void a_larger_fault_current_lowers_the_margin_and_crosses_into_warning_then_danger() {
         double previous = Double.POSITIVE_INFINITY;
         Verdict last = Verdict.OK;
