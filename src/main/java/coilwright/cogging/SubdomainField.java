@@ -27,8 +27,8 @@ final class SubdomainField {
     private static final int MIN_SLOT_HARMONICS = 6;
     private static final int MAX_SLOT_HARMONICS = 30;
     private static final int MAX_GAP_HARMONICS = 3000;
-    /** Gap harmonics per section length over opening width: resolves the opening to a tenth (the cogging of the reference
-     *  geometry changes by under 0.1 % from 7 to 28). */
+    /** Gap harmonics per (section length / opening width): resolves the opening to a tenth; the cogging of the
+     *  reference geometry changes by under 0.1 % between 7 and 28. */
     private static final double GAP_HARMONICS_PER_OPENING = 10;
 
     private final int slots;       // S, slots in the section
