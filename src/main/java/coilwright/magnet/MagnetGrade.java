@@ -52,6 +52,38 @@ public record MagnetGrade(String name, MagnetMaterial material, double remanence
     }
 
     /**
+     * Br(to) / Br(from): how the remanence, and with it a measured voltage constant, scales between two magnet
+     * temperatures under the reversible model of {@link #remanenceAt(double)}.
+     *
+     * @param fromTempC temperature the quantity refers to, C, -60 to 300
+     * @param toTempC   temperature wanted, C, -60 to 300
+     */
+    public double remanenceRatio(double fromTempC, double toTempC) {
+        return remanenceAt(toTempC) / remanenceAt(fromTempC);
+    }
+
+    /**
+     * Temperature coefficient of the intrinsic coercivity HcJ per kelvin (negative for NdFeB, positive for ferrite),
+     * by material and coercivity class; see {@link MagnetGrades#coercivityTempCoeffPerK(MagnetGrade)} for the values
+     * and their sources.
+     */
+    public double intrinsicCoercivityTempCoeffPerK() {
+        return MagnetGrades.coercivityTempCoeffPerK(this);
+    }
+
+    /**
+     * Intrinsic coercivity at a magnet temperature, linear model HcJ(T) = HcJ20 * (1 + beta * (T - 20)), kA/m
+     * (never below zero).
+     *
+     * @param magnetTempC magnet temperature in C, -60 to 300
+     */
+    public double intrinsicCoercivityAt(double magnetTempC) {
+        new Checks().range("magnetTempC", magnetTempC, -60.0, 300.0).throwIfAny();
+        return Math.max(0.0, intrinsicCoercivityKAPerM
+                * (1.0 + intrinsicCoercivityTempCoeffPerK() * (magnetTempC - 20.0)));
+    }
+
+    /**
      * Cautions for a magnet run at {@code magnetTempC}: above the grade's maximum working temperature, and for
      * ferrite in the cold (ferrite's coercivity falls as it cools, from memory: about +0.2 to +0.5 %/K).
      *

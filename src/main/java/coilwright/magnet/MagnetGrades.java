@@ -42,6 +42,10 @@ public final class MagnetGrades {
             new TemperatureClass("H", 17, 120, 50), new TemperatureClass("SH", 20, 150, 48),
             new TemperatureClass("UH", 25, 180, 42), new TemperatureClass("EH", 30, 200, 38));
 
+    // HcJ temperature coefficients per class, in the order of CLASSES (from memory, see coercivityTempCoeffPerK)
+    private static final double[] NDFEB_HCJ_COEFF_PER_K = {-0.0060, -0.0060, -0.0058, -0.0055, -0.0052, -0.0050};
+    private static final double FERRITE_HCJ_COEFF_PER_K = 0.0030;
+
     private static final Map<String, MagnetGrade> BY_NAME = build();
     private static final String UNKNOWN = "unknown magnet grade; allowed: " + String.join(", ", BY_NAME.keySet());
 
@@ -71,6 +75,25 @@ public final class MagnetGrades {
     private static void addFerrite(Map<String, MagnetGrade> m, String name, double brT, double hcjKAPerM) {
         m.put(name, new MagnetGrade(name, MagnetMaterial.FERRITE, brT, -0.0020, hcjKAPerM, 1.10, 250.0,
                 FERRITE_SOURCE));
+    }
+
+    /**
+     * Temperature coefficient of HcJ per kelvin for a grade. Sintered NdFeB by coercivity class (the class with the
+     * highest minimum HcJ the grade reaches): no suffix -0.60, M -0.60, H -0.58, SH -0.55, UH -0.52, EH -0.50 %/K;
+     * hard ferrite +0.30 %/K (its coercivity rises with temperature). Typical values over 20 to 150 C from
+     * manufacturers' data sheets, from memory; the spread between makers is about +-0.05 %/K.
+     */
+    static double coercivityTempCoeffPerK(MagnetGrade grade) {
+        if (grade.material() == MagnetMaterial.FERRITE) {
+            return FERRITE_HCJ_COEFF_PER_K;
+        }
+        double coeff = NDFEB_HCJ_COEFF_PER_K[0];
+        for (int i = 0; i < CLASSES.size(); i++) {
+            if (grade.intrinsicCoercivityKAPerM() >= CLASSES.get(i).hcjKOe() * KA_PER_M_PER_KOE * (1 - 1e-9)) {
+                coeff = NDFEB_HCJ_COEFF_PER_K[i];
+            }
+        }
+        return coeff;
     }
 
     /** Every grade, NdFeB by class then strength, then the ferrites. */

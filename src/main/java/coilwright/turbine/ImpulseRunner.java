@@ -13,8 +13,10 @@ import java.util.Locale;
  * @param flowM3s                   total flow, m^3/s, > 0 and <= 10
  * @param jetCount                  number of jets, 1 to 6
  * @param pitchCircleDiameterM      runner pitch-circle diameter (where the jet centreline meets the buckets), m, > 0 and <= 5
- * @param nozzleVelocityCoefficient Cv, 0.90 to 1.0 (0.97 to 0.98 for a good nozzle; from memory, textbook value)
- * @param speedRatio                bucket speed / jet speed at the optimum, 0.40 to 0.50 (0.46 typical; from memory, textbook value)
+ * @param nozzleVelocityCoefficient Cv, 0.90 to 1.0; default 0.98 (well-made nozzles 0.97 to 0.99, e.g. Dixon &amp; Hall,
+ *                                  "Fluid Mechanics and Thermodynamics of Turbomachinery", ch. 9; from memory)
+ * @param speedRatio                bucket speed / jet speed at the optimum, 0.40 to 0.50; default 0.46 (ideal 0.5,
+ *                                  0.46 to 0.47 in practice for losses in the buckets; same source, from memory)
  * @param peakEfficiency            runner efficiency at the optimum, > 0 and <= 0.95 (about 0.8 for a small runner; common practice)
  */
 public record ImpulseRunner(double netHeadM, double flowM3s, int jetCount, double pitchCircleDiameterM,
@@ -81,6 +83,11 @@ public record ImpulseRunner(double netHeadM, double flowM3s, int jetCount, doubl
     /** Jet (nozzle outlet) diameter for the flow per jet, m. */
     public double nozzleDiameterM() {
         return Jets.jetDiameterM(flowPerJetM3s(), jetVelocityMs());
+    }
+
+    /** Jet diameter for the flow per jet, m (the same as {@link #nozzleDiameterM()}). */
+    public double jetDiameterM() {
+        return nozzleDiameterM();
     }
 
     /** Bucket speed at the optimum, m/s. */

@@ -44,11 +44,31 @@ public record TurgoRunner(double netHeadM, double flowM3s, int jetCount, double 
      * @param targetSpeedRpm wanted optimum speed, rpm, > 0 and <= 6000
      */
     public static TurgoRunner forTargetSpeed(double netHeadM, double flowM3s, int jetCount, double targetSpeedRpm) {
+        return forTargetSpeed(netHeadM, flowM3s, jetCount, targetSpeedRpm,
+                ImpulseRunner.DEFAULT_NOZZLE_VELOCITY_COEFFICIENT, DEFAULT_SPEED_RATIO, DEFAULT_PEAK_EFFICIENCY);
+    }
+
+    /**
+     * A Turgo runner sized so that its optimum speed is the target, with the user's nozzle velocity coefficient and
+     * runner-to-jet speed ratio: D = 60 x ratio x Cv sqrt(2gH) / (pi n).
+     *
+     * @param targetSpeedRpm wanted optimum speed, rpm, > 0 and <= 6000
+     */
+    public static TurgoRunner forTargetSpeed(double netHeadM, double flowM3s, int jetCount, double targetSpeedRpm,
+                                             double nozzleVelocityCoefficient, double speedRatio,
+                                             double peakEfficiency) {
         new Checks().rangeExclusiveMin("targetSpeedRpm", targetSpeedRpm, 0.0, 6000.0)
-                .rangeExclusiveMin("netHeadM", netHeadM, 0.0, 1000.0).throwIfAny();
-        double runnerSpeed = DEFAULT_SPEED_RATIO
-                * Jets.jetVelocityMs(ImpulseRunner.DEFAULT_NOZZLE_VELOCITY_COEFFICIENT, netHeadM);
-        return turgo(netHeadM, flowM3s, jetCount, Jets.diameterM(runnerSpeed, targetSpeedRpm));
+                .rangeExclusiveMin("netHeadM", netHeadM, 0.0, 1000.0)
+                .range("nozzleVelocityCoefficient", nozzleVelocityCoefficient, 0.90, 1.0)
+                .range("speedRatio", speedRatio, 0.40, 0.55).throwIfAny();
+        double runnerSpeed = speedRatio * Jets.jetVelocityMs(nozzleVelocityCoefficient, netHeadM);
+        return new TurgoRunner(netHeadM, flowM3s, jetCount, Jets.diameterM(runnerSpeed, targetSpeedRpm),
+                nozzleVelocityCoefficient, speedRatio, peakEfficiency);
+    }
+
+    /** Jet diameter for the flow per jet, m (the same as {@link #nozzleDiameterM()}). */
+    public double jetDiameterM() {
+        return nozzleDiameterM();
     }
 
     /** Jet velocity Cv sqrt(2 g H), m/s. */

@@ -1,6 +1,9 @@
 package coilwright.turbine;
 
 import coilwright.validation.Checks;
+import org.apache.commons.math3.analysis.solvers.BrentSolver;
+
+import java.util.function.DoubleUnaryOperator;
 
 /**
  * A horizontal-axis wind rotor: P = 0.5 rho A v^3 Cp(lambda), lambda = omega R / v (actuator-disc
@@ -18,6 +21,10 @@ import coilwright.validation.Checks;
 public record WindRotor(double diameterM, int bladeCount, PowerCoefficientCurve curve, double maxRotorSpeedRpm,
                         double driveRatio, double drivetrainEfficiency) {
     private static final double RPM_TO_RAD_S = Math.PI / 30.0;
+    /** Steps from runaway down to standstill when bracketing the unloaded speed. */
+    private static final int UNLOADED_SCAN_STEPS = 64;
+    /** Accuracy of the unloaded speed, rpm. */
+    private static final double UNLOADED_ACCURACY_RPM = 1e-3;
 
     public WindRotor {
         Checks c = new Checks();
@@ -146,6 +153,60 @@ public record WindRotor(double diameterM, int bladeCount, PowerCoefficientCurve 
      */
     public double freeSpinSpeedRpm(double windSpeedMs) {
         return speedForTipSpeedRatio(windSpeedMs, curve.runawayTipSpeedRatio());
+    }
+
+    /** The tip-speed ratio at which the curve's Cp returns to 0: no rotor spins faster than this, loaded or not. */
+    public double runawayTipSpeedRatio() {
+        return curve.runawayTipSpeedRatio();
+    }
+
+    /**
+     * Torque of the rotor held still, 0.5 rho A R v^2 Cq0, N m.
+     *
+     * @param windSpeedMs                wind speed, m/s, 0 to 100
+     * @param airDensityKgM3             air density, kg/m^3, &gt; 0 and &lt;= 2
+     * @param startingTorqueCoefficient  Cq0 (see {@link StartingTorque}), &gt;= 0
+     */
+    public double standstillTorqueNm(double windSpeedMs, double airDensityKgM3, double startingTorqueCoefficient) {
+        checkOperatingPoint(windSpeedMs, 0.0, airDensityKgM3);
+        new Checks().nonNegative("startingTorqueCoefficient", startingTorqueCoefficient).throwIfAny();
+        return 0.5 * airDensityKgM3 * sweptAreaM2() * radiusM() * windSpeedMs * windSpeedMs * startingTorqueCoefficient;
+    }
+
+    /**
+     * Speed of the rotor turning freely against a drag torque (bearings, windage, an unloaded alternator's iron loss
+     * and delta circulating current, referred to the rotor shaft): the highest speed at which the rotor's torque
+     * equals the drag, found between standstill and the curve's runaway speed with Brent's method. It never exceeds
+     * {@link #freeSpinSpeedRpm(double)}; 0 when the drag at standstill exceeds the rotor's torque there.
+     *
+     * @param windSpeedMs          wind speed, m/s, 0 to 100
+     * @param airDensityKgM3       air density, kg/m^3, &gt; 0 and &lt;= 2
+     * @param dragTorqueAtRotorNm  drag torque at the rotor shaft as a function of rotor speed (rpm), N m, &gt;= 0
+     * @return rotor speed, rpm
+     */
+    public double unloadedRotorSpeedRpm(double windSpeedMs, double airDensityKgM3,
+                                        DoubleUnaryOperator dragTorqueAtRotorNm) {
+        checkOperatingPoint(windSpeedMs, 0.0, airDensityKgM3);
+        new Checks().present("dragTorqueAtRotorNm", dragTorqueAtRotorNm).throwIfAny();
+        double runaway = freeSpinSpeedRpm(windSpeedMs);
+        if (windSpeedMs == 0.0 || runaway == 0.0) {
+            return 0.0;
+        }
+        DoubleUnaryOperator net = n -> torqueNm(windSpeedMs, n, airDensityKgM3)
+                - dragTorqueAtRotorNm.applyAsDouble(n);
+        if (net.applyAsDouble(runaway) >= 0) {
+            return runaway;
+        }
+        double high = runaway;
+        for (int i = 1; i <= UNLOADED_SCAN_STEPS; i++) {
+            double low = runaway * (UNLOADED_SCAN_STEPS - i) / UNLOADED_SCAN_STEPS;
+            if (net.applyAsDouble(low) >= 0) {
+                return new BrentSolver(UNLOADED_ACCURACY_RPM)
+                        .solve(200, net::applyAsDouble, low, high);
+            }
+            high = low;
+        }
+        return 0.0;
     }
 
     /**
