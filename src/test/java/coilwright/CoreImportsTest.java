@@ -15,7 +15,7 @@ import static org.junit.jupiter.api.Assertions.*;
 /** The calculation core knows no web, JSON, database or template library (DESIGN.md section 2). */
 class CoreImportsTest {
     static final List<String> CORE = List.of("winding", "magnet", "conductor", "machine", "load", "turbine",
-            "system", "rewind", "search", "safety", "validation");
+            "system", "rewind", "search", "sizing", "safety", "validation");
     static final Pattern FORBIDDEN = Pattern.compile(
             "^\\s*import\\s+(static\\s+)?(io\\.javalin|com\\.fasterxml|tools\\.jackson|java\\.sql|javax\\.sql|org\\.thymeleaf"
                     + "|coilwright\\.web|coilwright\\.store|coilwright\\.service|org\\.h2|org\\.postgresql|com\\.zaxxer|org\\.flywaydb)\\b.*");

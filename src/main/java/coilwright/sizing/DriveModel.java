@@ -1,0 +1,49 @@
+package coilwright.sizing;
+
+import coilwright.machine.Alternator;
+
+import java.util.List;
+
+/**
+ * A drive as the search sees it: the speeds that matter, the closed-form bounds of what a candidate can deliver,
+ * the drive's own limits, and the full evaluation of one built alternator.
+ */
+interface DriveModel {
+
+    /** Alternator speed at which the open-circuit voltage is checked, rpm. */
+    double checkSpeedRpm();
+
+    /** Where that speed comes from, in words. */
+    String checkSpeedSource();
+
+    /** The highest cut-in speed a design may have and still meet the drive's limits, rpm. */
+    double highestCutInRpm();
+
+    /** A DC current every design meeting the limits carries at least at the rated point, A (0 when none is known). */
+    double ratedDcCurrentFloorA();
+
+    /** An upper bound of the power into the battery at the rated point, W. */
+    double ratedPowerBoundW(ScreenValues s);
+
+    /** An upper bound of the annual energy into the battery, kWh; 0 when the drive gives no annual energy. */
+    double energyBoundKWh(ScreenValues s);
+
+    /** True when the drive gives an annual energy. */
+    boolean hasEnergy();
+
+    /** The drive's own limits (cut-in, charging, rated power). */
+    List<Limit> limits();
+
+    /** The candidate under the full model. */
+    FullEvaluation evaluate(Alternator alt);
+
+    static DriveModel of(SizingRequest req, LoadConstants lc) {
+        if (req.drive() instanceof WindDrive w) {
+            return new WindDriveModel(w, req.load(), lc, req.limits().maxCutInWindSpeedMs());
+        }
+        if (req.drive() instanceof HydroDrive h) {
+            return new HydroDriveModel(h, req.load(), lc);
+        }
+        return new SpeedDriveModel((SpeedTargets) req.drive(), req.load(), lc);
+    }
+}

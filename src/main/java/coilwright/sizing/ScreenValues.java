@@ -1,0 +1,109 @@
+package coilwright.sizing;
+
+import coilwright.conductor.CoilWindow;
+import coilwright.conductor.Copper;
+import coilwright.machine.Connection;
+import coilwright.machine.EmfEquation;
+
+/**
+ * The closed-form figures of one candidate, computed as the full model computes them (same formulas, same order
+ * of operations) wherever they are exact. A mutable scratch object, one per screening thread, because the screen
+ * runs millions of times a second and must not allocate.
+ */
+final class ScreenValues {
+    private static final double SQRT2 = Math.sqrt(2);
+    private static final double SQRT3 = Math.sqrt(3);
+
+    long index;
+    WindingCase windingCase;
+    WireOption wire;
+    int turns;
+    Connection connection;
+
+    /** Line-to-line EMF per rpm, V rms. */
+    double keLineVPerRpm;
+    /** Equivalent-star phase EMF per rpm, V rms. */
+    double starEmfVPerRpm;
+    /** Equivalent-star resistance per line: winding at its temperature plus the AC cable, Ohm. */
+    double lineOhm;
+    /** Cut-in speed: sqrt(2) E_LL = V_b + 2 V_d, rpm. */
+    double cutInRpm;
+    /** Coil fill on the window's basis (copper fill in slots, wire fill of air-cored coils). */
+    double fill;
+    /** Copper mass of all phases, kg. */
+    double copperMassKg;
+    /** Magnet mass, kg. */
+    double magnetMassKg;
+    /** Copper area of one parallel path's conductor, m^2. */
+    double conductorAreaM2;
+    /** Winding (phase) rms current per rms line current: 1 in star, 1/sqrt(3) in delta. */
+    double phasePerLineCurrent;
+
+    /**
+     * Works out the figures of one candidate.
+     *
+     * @param lc the load's constants
+     */
+    void compute(long index, WindingCase wc, WireOption w, int turnsPerCoil, Connection conn, LoadConstants lc) {
+        this.index = index;
+        this.windingCase = wc;
+        this.wire = w;
+        this.turns = turnsPerCoil;
+        this.connection = conn;
+        Layout l = wc.layout();
+        int paths = wc.paths();
+        int seriesTurns = turnsPerCoil * l.coilsPerPhase() / paths;
+        double kePhase = EmfEquation.phaseRmsV(EmfEquation.frequencyHz(l.polePairs(), 1.0), seriesTurns,
+                l.windingFactor(), l.fluxPerPoleWb());
+        boolean star = conn == Connection.STAR;
+        keLineVPerRpm = star ? kePhase * SQRT3 : kePhase;
+        starEmfVPerRpm = star ? kePhase : kePhase / SQRT3;
+        double lengthM = (double) turnsPerCoil * l.coilsPerPhase() * l.meanTurnLengthM();
+        double phaseOhm = Copper.RESISTIVITY_20C_OHM_M * lengthM / w.copperAreaM2() / ((double) paths * paths)
+                * lc.copperHotRatio();
+        lineOhm = (star ? phaseOhm : phaseOhm / 3) + lc.acCableOhm();
+        cutInRpm = lc.thresholdV() / (SQRT2 * keLineVPerRpm);
+        fill = turnsPerCoil * (l.windowKind() == CoilWindow.Kind.SLOTTED ? w.copperAreaM2() : w.overallAreaM2())
+                / l.windowAreaM2();
+        copperMassKg = Copper.DENSITY_KG_PER_M3 * (lengthM * w.copperAreaM2()) * 3;
+        magnetMassKg = l.magnetMassKg();
+        conductorAreaM2 = w.copperAreaM2();
+        phasePerLineCurrent = star ? 1.0 : 1.0 / SQRT3;
+    }
+
+    /** Open-circuit line EMF at a speed, V rms. */
+    double openCircuitV(double speedRpm) {
+        return keLineVPerRpm * speedRpm;
+    }
+
+    /** Largest average DC current at a speed ({@link BridgeBounds#maxDcCurrentA}), A. */
+    double maxDcCurrentA(double speedRpm, LoadConstants lc) {
+        return BridgeBounds.maxDcCurrentA(starEmfVPerRpm * speedRpm, keLineVPerRpm * speedRpm, lc.thresholdV(),
+                lineOhm, lc.dcSideOhm());
+    }
+
+    /** Largest average DC current a shaft power can supply after the least losses, A. */
+    double dcCurrentFromShaftPowerA(double shaftPowerW, LoadConstants lc) {
+        return BridgeBounds.dcCurrentFromShaftPowerA(shaftPowerW, lc.thresholdV(), lineOhm, lc.dcSideOhm());
+    }
+
+    /**
+     * Lowest rms current density at a DC current of at least {@code dcCurrentA}, A/mm^2
+     * ({@link BridgeBounds#minLineCurrentRmsA}).
+     */
+    double minCurrentDensityAPerMm2(double dcCurrentA) {
+        return BridgeBounds.minLineCurrentRmsA(dcCurrentA) * phasePerLineCurrent / windingCase.paths()
+                / (conductorAreaM2 * 1e6);
+    }
+
+    /** Copper plus magnet mass, kg. */
+    double activeMassKg() {
+        return copperMassKg + magnetMassKg;
+    }
+
+    /** Material cost at the prices given. */
+    double cost(MaterialPrices prices) {
+        return copperMassKg * prices.copperPerKg()
+                + magnetMassKg * prices.magnetPerKg(windingCase.layout().magnetMaterial());
+    }
+}
