@@ -54,6 +54,10 @@ interface Limit {
 
     /** The figure with its unit. */
     default String format(double figure) {
-        return Double.isFinite(figure) ? String.format(Locale.ROOT, "%.3g %s", figure, unit()) : "never";
+        if (!Double.isFinite(figure)) {
+            return "never";
+        }
+        String number = String.format(Locale.ROOT, "%.3g", figure);
+        return unit().isEmpty() ? number : number + " " + unit();
     }
 }

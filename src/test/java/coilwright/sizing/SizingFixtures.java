@@ -122,4 +122,42 @@ final class SizingFixtures {
                 radialWinding(2, 40, 14, 22, 3, Cooling.ENCLOSED_NATURAL), new Limits(0, 0, 0, 0, 3.5),
                 Objective.ANNUAL_ENERGY, new MaterialPrices(15, 60, 8), 5, 2000);
     }
+
+    /** A small axial wind space: one disc and stator, 16 poles, a few turns and wires. */
+    static SizingRequest smallAxialWind(Objective objective) {
+        AxialBuild build = new AxialBuild(List.of(0.39), 0.01, List.of(0.016), 0.0015, 0.001, 16, 16,
+                List.of(new MagnetOption("N42", 0.040, 0.050, 0.010, List.of(1))), 40);
+        WindingChoices w = new WindingChoices(16, 24, WireRange.awg(13, 13, 2), List.of(Connection.STAR,
+                Connection.DELTA), 1, 0.93, Cooling.AIR_COOLED_AXIAL_OPEN_COIL, ThermalClass.H, 70);
+        return new SizingRequest(wind3m(), leadAcid24V(), build, w, new Limits(0, 0, 0, 0, 3.5), objective,
+                new MaterialPrices(15, 60, 8), 3, 10_000);
+    }
+
+    /** A small axial space on speed targets: start charging by 180 rpm, 600 W at 350 rpm. */
+    static SizingRequest smallAxialSpeed(Objective objective, Limits limits) {
+        AxialBuild build = new AxialBuild(List.of(0.40), 0.01, List.of(0.016), 0.0015, 0.001, 12, 16,
+                List.of(new MagnetOption("N42", 0.040, 0.050, 0.010, List.of(1))), 40);
+        WindingChoices w = new WindingChoices(20, 60, WireRange.awg(13, 16, 2), List.of(Connection.STAR,
+                Connection.DELTA), 2, 0.9, Cooling.AIR_COOLED_AXIAL_OPEN_COIL, ThermalClass.H, 70);
+        return new SizingRequest(new SpeedTargets(180, 300, 400, 600), leadAcid24V(), build, w, limits, objective,
+                new MaterialPrices(15, 60, 8), 4, 100_000);
+    }
+
+    /** A small radial space on speed targets in the motor stator: 12 V, charging by 150 rpm, 250 W at 300 rpm. */
+    static SizingRequest smallRadialSpeed(Objective objective, Limits limits) {
+        return new SizingRequest(new SpeedTargets(150, 250, 120, 500), leadAcid12V(), motorStator(8, 12),
+                radialWinding(4, 20, 16, 18, 2, Cooling.ENCLOSED_NATURAL), limits, objective,
+                new MaterialPrices(15, 60, 8), 4, 100_000);
+    }
+
+    /** A small hydro space in the 24-slot stator. */
+    static SizingRequest smallRadialHydro(Objective objective) {
+        RadialBuild build = new RadialBuild(RotorSide.INNER, 0.14, 0.08, 24,
+                new SlottedStator(0.024, 0.008, 0.0015, 0.0002, 0.006), 0.001, 0.0025, List.of(Layers.DOUBLE), 20, 20,
+                List.of(new MagnetOption("N42SH", 0.010, 0.040, 0.004, List.of(1, 2))), 60);
+        WindingChoices w = new WindingChoices(6, 16, WireRange.awg(15, 16, 2), List.of(Connection.STAR,
+                Connection.DELTA), 1, 0.9, Cooling.OPEN_VENTILATED, ThermalClass.F, 90);
+        return new SizingRequest(hydro(), lifepo48V(), build, w, Limits.defaults(), objective,
+                new MaterialPrices(15, 60, 8), 3, 10_000);
+    }
 }
