@@ -23,6 +23,14 @@ package coilwright.sizing;
  * </ol>
  * The same balance bounds the current by the shaft power (at least (V_b + 2 V_d) d + (1.5 R + R_dc) d^2), the
  * efficiency by V_b / (V_b + 2 V_d + (1.5 R + R_dc) d), and the rms line current from below by d / sqrt(2).
+ *
+ * <p>A lower bound on the line current, with the inductance L per line (reactance X = omega L): the stored energy
+ * W = (L/2) sum i_k^2 lies between (3L/4) i_dc^2 and L i_dc^2 and dW/dt &lt;= i_dc [sqrt(2) E_LL - a -
+ * (1.5 R + R_dc) i_dc]; at the maximum of W the bracket is not negative, so the DC current never exceeds
+ * (2/sqrt(3)) (sqrt(2) E_LL - a) / (1.5 R + R_dc). The terminals' line-to-line voltage never exceeds the DC side's,
+ * a + R_dc i_dc, so its fundamental is at most 4/pi of that peak (a square wave's); the fundamental of the line
+ * current then carries at least the rest of the EMF across the line impedance:
+ * <pre>  I_rms &gt;= |I_1| / sqrt(2) &gt;= (sqrt(2) E_LL - (4/pi) V_peak) / (sqrt(6) |R + jX|).</pre>
  */
 final class BridgeBounds {
     /** Least sum of the squared line currents over the squared DC current. */
@@ -81,15 +89,46 @@ final class BridgeBounds {
         return positiveRoot(LOSS_FACTOR * lineResistanceOhm + dcResistanceOhm, thresholdV, shaftPowerW);
     }
 
-    /** Highest efficiency (battery power over shaft power) at a DC current of at least {@code dcCurrentA}. */
-    static double maxEfficiency(double batteryV, double thresholdV, double lineResistanceOhm, double dcResistanceOhm,
-                                double dcCurrentA) {
-        return batteryV / (thresholdV + (LOSS_FACTOR * lineResistanceOhm + dcResistanceOhm) * dcCurrentA);
+    /** Least rms line current at an average DC current, A: sum I_k^2 &gt;= 1.5 d^2 over three equal lines. */
+    static double lineCurrentFromDcA(double dcCurrentA) {
+        return dcCurrentA / SQRT2;
     }
 
-    /** Least rms line current at an average DC current, A: sum I_k^2 &gt;= 1.5 d^2 over three equal lines. */
-    static double minLineCurrentRmsA(double dcCurrentA) {
-        return dcCurrentA / SQRT2;
+    /**
+     * Least rms line current at a speed, A (see the class comment); 0 when the EMF cannot drive current past the
+     * bridge's voltage.
+     *
+     * @param lineEmfRmsV       E_LL, V rms
+     * @param thresholdV        a = V_b + 2 V_d, V
+     * @param lineResistanceOhm R per line, Ohm
+     * @param reactanceOhm      X = omega L per line of the equivalent star, Ohm
+     * @param dcResistanceOhm   R_dc, Ohm
+     */
+    static double minLineCurrentRmsA(double lineEmfRmsV, double thresholdV, double lineResistanceOhm,
+                                     double reactanceOhm, double dcResistanceOhm) {
+        double peakEmf = SQRT2 * lineEmfRmsV;
+        double drive = peakEmf - thresholdV;
+        if (drive <= 0) {
+            return 0;
+        }
+        double peakDcA = 2 / Math.sqrt(3) * drive / (LOSS_FACTOR * lineResistanceOhm + dcResistanceOhm);
+        double left = peakEmf - 4 / Math.PI * (thresholdV + dcResistanceOhm * peakDcA);
+        return left <= 0 ? 0 : left / (Math.sqrt(6) * Math.hypot(lineResistanceOhm, reactanceOhm));
+    }
+
+    /**
+     * Highest efficiency at a DC current between {@code minDcA} and {@code maxDcA} with a line current of at least
+     * {@code minLineA}: the losses beyond (V_b + 2 V_d) d are at least (1.5 R + R_dc) d^2 and at least 3 R I^2.
+     */
+    static double maxEfficiency(double batteryV, double thresholdV, double lineResistanceOhm, double dcResistanceOhm,
+                                double minDcA, double maxDcA, double minLineA) {
+        double q = LOSS_FACTOR * lineResistanceOhm + dcResistanceOhm;
+        double fixedW = 3 * lineResistanceOhm * minLineA * minLineA;
+        double d = Math.max(minDcA, Math.min(maxDcA, Math.sqrt(fixedW / q)));
+        if (d <= 0) {
+            return batteryV / thresholdV;
+        }
+        return batteryV * d / (thresholdV * d + Math.max(q * d * d, fixedW));
     }
 
     /** Positive root of q x^2 + b x = c (q &gt;= 0, b &gt; 0, c &gt;= 0), in the form that keeps its digits. */

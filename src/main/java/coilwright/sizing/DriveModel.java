@@ -19,8 +19,14 @@ interface DriveModel {
     /** The highest cut-in speed a design may have and still meet the drive's limits, rpm. */
     double highestCutInRpm();
 
-    /** A DC current every design meeting the limits carries at least at the rated point, A (0 when none is known). */
-    double ratedDcCurrentFloorA();
+    /**
+     * A lower bound of the rms line current at the rated point of a candidate that meets the drive's own limits, A
+     * (0 when none is known).
+     */
+    double ratedLineCurrentFloorA(ScreenValues s);
+
+    /** An upper bound of the efficiency at the rated point of a candidate that meets the drive's own limits. */
+    double ratedEfficiencyBound(ScreenValues s);
 
     /** An upper bound of the power into the battery at the rated point, W. */
     double ratedPowerBoundW(ScreenValues s);

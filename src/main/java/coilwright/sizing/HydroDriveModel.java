@@ -98,8 +98,14 @@ final class HydroDriveModel implements DriveModel {
     }
 
     @Override
-    public double ratedDcCurrentFloorA() {
+    public double ratedLineCurrentFloorA(ScreenValues s) {
         return 0;
+    }
+
+    /** Only the diodes are certain to take their share: V_b / (V_b + 2 V_d). */
+    @Override
+    public double ratedEfficiencyBound(ScreenValues s) {
+        return lc.batteryV() / lc.thresholdV();
     }
 
     @Override

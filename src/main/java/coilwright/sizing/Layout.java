@@ -22,6 +22,8 @@ import java.util.List;
  * @param meanTurnLengthM      mean turn length, m
  * @param windowAreaM2         area one coil side may fill, m^2
  * @param windowKind           slotted (copper fill limited) or air-cored (wire fill limited)
+ * @param inductanceOneTurnH   phase inductance of the full model's estimate with one turn per coil and one path, H;
+ *                             every part of the estimate grows as the square of the series turns
  * @param magnetMassKg         magnets on the rotor(s), kg
  * @param magnetMaterial       for the magnet price
  * @param parallelPaths        the path counts the layout allows, within the request's maximum
@@ -29,7 +31,7 @@ import java.util.List;
  */
 record Layout(RotorSpec rotor, StatorSpec stator, WindingSpec winding, int coilsPerPhase, double windingFactor,
               double fluxPerPoleWb, double meanTurnLengthM, double windowAreaM2, CoilWindow.Kind windowKind,
-              double magnetMassKg, MagnetMaterial magnetMaterial, List<Integer> parallelPaths, String label) {
+              double inductanceOneTurnH, double magnetMassKg, MagnetMaterial magnetMaterial, List<Integer> parallelPaths, String label) {
     Layout {
         parallelPaths = List.copyOf(parallelPaths);
     }

@@ -86,7 +86,7 @@ record Layouts(List<Layout> layouts, long drafted, EnumMap<LayoutRejection, Long
                     .filter(a -> a <= w.maxParallelPaths()).toList();
             return Optional.of(new Layout(d.rotor(), d.stator(), d.winding(), alt.winding().coilsPerPhase(),
                     alt.winding().fundamentalTotalFactor(), alt.gapField().fluxPerPoleWb(), alt.meanTurnLengthM(),
-                    windowM2, kind, alt.magnetMassKg(), d.rotor().grade().material(), paths, d.label()));
+                    windowM2, kind, alt.phaseInductanceH(), alt.magnetMassKg(), d.rotor().grade().material(), paths, d.label()));
         } catch (InfeasibleDesignException | InvalidInputException e) {
             return Optional.empty();
         }

@@ -32,15 +32,14 @@ record LimitSet(List<Limit> limits, List<AppliedLimit> applied, List<String> not
         out.addAll(drive.limits());
         double jMax = l.maxCurrentDensityAPerMm2() > 0 ? l.maxCurrentDensityAPerMm2()
                 : req.winding().cooling().highAPerMm2();
-        double floorA = drive.ratedDcCurrentFloorA();
         out.add(new UpperLimit("currentDensity", "limits.maxCurrentDensityAPerMm2", "A/mm^2", jMax,
-                "stays within %.1f A/mm^2 at the rated point", s -> s.minCurrentDensityAPerMm2(floorA),
+                "stays within %.1f A/mm^2 at the rated point",
+                s -> s.currentDensityAPerMm2(drive.ratedLineCurrentFloorA(s)),
                 FullEvaluation::ratedCurrentDensityAPerMm2));
         if (l.minEfficiency() > 0) {
             out.add(new LowerLimit("efficiency", "limits.minEfficiency", "", l.minEfficiency(),
                     "is at least %.2f efficient at the rated point",
-                    s -> BridgeBounds.maxEfficiency(lc.batteryV(), lc.thresholdV(), s.lineOhm, lc.dcSideOhm(), floorA),
-                    FullEvaluation::ratedEfficiency));
+                    drive::ratedEfficiencyBound, FullEvaluation::ratedEfficiency));
         }
         if (l.maxCurrentDensityAPerMm2() == 0) {
             notes.add(String.format(Locale.ROOT, "Current density limited to %.1f A/mm^2, the top of the %s band; "

@@ -28,8 +28,7 @@ final class Scoring {
         double v = switch (objective) {
             case ANNUAL_ENERGY -> drive.energyBoundKWh(s);
             case OUTPUT_AT_RATED -> drive.ratedPowerBoundW(s);
-            case EFFICIENCY_AT_RATED -> BridgeBounds.maxEfficiency(lc.batteryV(), lc.thresholdV(), s.lineOhm,
-                    lc.dcSideOhm(), drive.ratedDcCurrentFloorA());
+            case EFFICIENCY_AT_RATED -> drive.ratedEfficiencyBound(s);
             case ACTIVE_MASS -> -s.activeMassKg();
             case MATERIAL_COST -> -s.cost(prices);
         };

@@ -26,6 +26,10 @@ final class ScreenValues {
     double starEmfVPerRpm;
     /** Equivalent-star resistance per line: winding at its temperature plus the AC cable, Ohm. */
     double lineOhm;
+    /** Equivalent-star inductance per line, H. */
+    double starInductanceH;
+    /** Pole pairs. */
+    int polePairs;
     /** Cut-in speed: sqrt(2) E_LL = V_b + 2 V_d, rpm. */
     double cutInRpm;
     /** Coil fill on the window's basis (copper fill in slots, wire fill of air-cored coils). */
@@ -63,6 +67,10 @@ final class ScreenValues {
                 * lc.copperHotRatio();
         lineOhm = (star ? phaseOhm : phaseOhm / 3) + lc.acCableOhm();
         cutInRpm = lc.thresholdV() / (SQRT2 * keLineVPerRpm);
+        double turnsPerPath = (double) turnsPerCoil / paths;
+        double phaseH = l.inductanceOneTurnH() * turnsPerPath * turnsPerPath;
+        starInductanceH = star ? phaseH : phaseH / 3;
+        polePairs = l.polePairs();
         fill = turnsPerCoil * (l.windowKind() == CoilWindow.Kind.SLOTTED ? w.copperAreaM2() : w.overallAreaM2())
                 / l.windowAreaM2();
         copperMassKg = Copper.DENSITY_KG_PER_M3 * (lengthM * w.copperAreaM2()) * 3;
@@ -82,18 +90,21 @@ final class ScreenValues {
                 lineOhm, lc.dcSideOhm());
     }
 
+    /** Least rms line current at a speed ({@link BridgeBounds#minLineCurrentRmsA}), A. */
+    double minLineCurrentA(double speedRpm, LoadConstants lc) {
+        double reactanceOhm = 2 * Math.PI * polePairs * speedRpm / 60 * starInductanceH;
+        return BridgeBounds.minLineCurrentRmsA(keLineVPerRpm * speedRpm, lc.thresholdV(), lineOhm, reactanceOhm,
+                lc.dcSideOhm());
+    }
+
     /** Largest average DC current a shaft power can supply after the least losses, A. */
     double dcCurrentFromShaftPowerA(double shaftPowerW, LoadConstants lc) {
         return BridgeBounds.dcCurrentFromShaftPowerA(shaftPowerW, lc.thresholdV(), lineOhm, lc.dcSideOhm());
     }
 
-    /**
-     * Lowest rms current density at a DC current of at least {@code dcCurrentA}, A/mm^2
-     * ({@link BridgeBounds#minLineCurrentRmsA}).
-     */
-    double minCurrentDensityAPerMm2(double dcCurrentA) {
-        return BridgeBounds.minLineCurrentRmsA(dcCurrentA) * phasePerLineCurrent / windingCase.paths()
-                / (conductorAreaM2 * 1e6);
+    /** Current density in the winding at an rms line current, A/mm^2. */
+    double currentDensityAPerMm2(double lineCurrentA) {
+        return lineCurrentA * phasePerLineCurrent / windingCase.paths() / (conductorAreaM2 * 1e6);
     }
 
     /** Copper plus magnet mass, kg. */

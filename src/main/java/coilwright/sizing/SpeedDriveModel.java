@@ -34,10 +34,25 @@ final class SpeedDriveModel implements DriveModel {
         return targets.cutInSpeedRpm();
     }
 
-    /** A design meeting the rated power carries at least P / V_b into the battery. */
+    /**
+     * At the rated speed the line current is at least what the EMF drives past the bridge's voltage
+     * ({@link BridgeBounds#minLineCurrentRmsA}); a design that meets the rated power also carries at least P / V_b
+     * into the battery, so a line current of at least that / sqrt(2).
+     */
     @Override
-    public double ratedDcCurrentFloorA() {
+    public double ratedLineCurrentFloorA(ScreenValues s) {
+        return Math.max(BridgeBounds.lineCurrentFromDcA(powerFloorA()), s.minLineCurrentA(targets.ratedSpeedRpm(), lc));
+    }
+
+    private double powerFloorA() {
         return targets.ratedPowerW() / lc.batteryV();
+    }
+
+    @Override
+    public double ratedEfficiencyBound(ScreenValues s) {
+        double rated = targets.ratedSpeedRpm();
+        return BridgeBounds.maxEfficiency(lc.batteryV(), lc.thresholdV(), s.lineOhm, lc.dcSideOhm(), powerFloorA(),
+                s.maxDcCurrentA(rated, lc), s.minLineCurrentA(rated, lc));
     }
 
     @Override

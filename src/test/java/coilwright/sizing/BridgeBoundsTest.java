@@ -53,12 +53,17 @@ class BridgeBoundsTest {
                 () -> "shaft power " + p.powerFromEmfW() + " below the least losses at " + d + " A");
         double shaft = p.powerFromEmfW();
         assertTrue(d <= BridgeBounds.dcCurrentFromShaftPowerA(shaft, a, lineOhm, dcOhm) * (1 + SOLVER_TOLERANCE) + 1e-12);
-        if (d > 0) {
-            assertTrue(p.efficiencyFromEmf() <= BridgeBounds.maxEfficiency(batteryV, a, lineOhm, dcOhm, d)
-                    * (1 + SOLVER_TOLERANCE));
-        }
-        assertTrue(p.lineCurrentRmsA() >= BridgeBounds.minLineCurrentRmsA(d) * (1 - SOLVER_TOLERANCE),
+        double reactanceOhm = source.angularFrequencyRadPerS() * source.starInductanceH();
+        double minLine = BridgeBounds.minLineCurrentRmsA(source.lineEmfRmsV(), a, lineOhm, reactanceOhm, dcOhm);
+        assertTrue(p.lineCurrentRmsA() >= minLine * (1 - SOLVER_TOLERANCE) - 1e-12,
+                () -> "line current " + p.lineCurrentRmsA() + " below its bound " + minLine);
+        assertTrue(p.lineCurrentRmsA() >= BridgeBounds.lineCurrentFromDcA(d) * (1 - SOLVER_TOLERANCE),
                 () -> "line current " + p.lineCurrentRmsA() + " below d / sqrt(2) at d = " + d);
+        if (d > 0) {
+            double bound = BridgeBounds.maxEfficiency(batteryV, a, lineOhm, dcOhm, 0.5 * d, cap, minLine);
+            assertTrue(p.efficiencyFromEmf() <= bound * (1 + SOLVER_TOLERANCE),
+                    () -> "efficiency " + p.efficiencyFromEmf() + " above its bound " + bound);
+        }
     }
 
     @Test
@@ -77,6 +82,14 @@ class BridgeBoundsTest {
         double e = 100;
         double cap = BridgeBounds.maxDcCurrentA(e, Math.sqrt(3) * e, 10, 1, 0);
         assertEquals((Math.sqrt(4.5) * e - 10) / 1.5, cap, 1e-9);
+    }
+
+    @Test
+    void the_line_current_bound_is_zero_until_the_emf_clears_the_square_wave_of_the_bridge() {
+        // 4/pi x 25.6 V = 32.6 V: a line EMF of 23 V rms (32.5 V peak) proves nothing yet, 30 V rms does
+        assertEquals(0, BridgeBounds.minLineCurrentRmsA(23, 25.6, 0.1, 0.05, 0));
+        double i = BridgeBounds.minLineCurrentRmsA(30, 25.6, 0.1, 0.05, 0);
+        assertEquals((Math.sqrt(2) * 30 - 4 / Math.PI * 25.6) / (Math.sqrt(6) * Math.hypot(0.1, 0.05)), i, 1e-12);
     }
 
     @Test
