@@ -25,19 +25,17 @@ record LimitSet(List<Limit> limits, List<AppliedLimit> applied, List<String> not
         boolean axial = req.build() instanceof AxialBuild;
         double fill = l.maxFill() > 0 ? l.maxFill()
                 : axial ? FillCheck.AIR_CORED_WIRE_FILL_LIMIT : FillCheck.SLOTTED_COPPER_FILL_LIMIT;
-        out.add(new UpperLimit("fill", "limits.maxFill", "", fill,
-                axial ? "winds with a wire fill of at most %.2f" : "winds with a copper fill of at most %.2f",
-                s -> s.fill, FullEvaluation::fill));
+        out.add(new FillLimit(fill, axial));
         openCircuit(req, drive, lc, out, notes);
         out.addAll(drive.limits());
         double jMax = l.maxCurrentDensityAPerMm2() > 0 ? l.maxCurrentDensityAPerMm2()
                 : req.winding().cooling().highAPerMm2();
-        out.add(new UpperLimit("currentDensity", "limits.maxCurrentDensityAPerMm2", "A/mm^2", jMax,
+        out.add(FigureLimit.atMost("currentDensity", "limits.maxCurrentDensityAPerMm2", "A/mm^2", jMax,
                 "stays within %.1f A/mm^2 at the rated point",
                 s -> s.currentDensityAPerMm2(drive.ratedLineCurrentFloorA(s)),
                 FullEvaluation::ratedCurrentDensityAPerMm2));
         if (l.minEfficiency() > 0) {
-            out.add(new LowerLimit("efficiency", "limits.minEfficiency", "", l.minEfficiency(),
+            out.add(FigureLimit.atLeast("efficiency", "limits.minEfficiency", "", l.minEfficiency(),
                     "is at least %.2f efficient at the rated point",
                     drive::ratedEfficiencyBound, FullEvaluation::ratedEfficiency));
         }
@@ -78,7 +76,7 @@ record LimitSet(List<Limit> limits, List<AppliedLimit> applied, List<String> not
                 return;
             }
         }
-        out.add(new UpperLimit("openCircuitVoltage", "limits.maxOpenCircuitLineRmsV", "V", allowed,
+        out.add(FigureLimit.atMost("openCircuitVoltage", "limits.maxOpenCircuitLineRmsV", "V", allowed,
                 "stays under %.0f V open-circuit at " + Math.round(speed) + " rpm", s -> s.openCircuitV(speed),
                 FullEvaluation::openCircuitLineRmsV));
     }

@@ -34,6 +34,8 @@ final class ScreenValues {
     double cutInRpm;
     /** Coil fill on the window's basis (copper fill in slots, wire fill of air-cored coils). */
     double fill;
+    /** Wire fill (enamelled circles over the window), whatever the window's basis. */
+    double wireFill;
     /** Copper mass of all phases, kg. */
     double copperMassKg;
     /** Magnet mass, kg. */
@@ -71,8 +73,8 @@ final class ScreenValues {
         double phaseH = l.inductanceOneTurnH() * turnsPerPath * turnsPerPath;
         starInductanceH = star ? phaseH : phaseH / 3;
         polePairs = l.polePairs();
-        fill = turnsPerCoil * (l.windowKind() == CoilWindow.Kind.SLOTTED ? w.copperAreaM2() : w.overallAreaM2())
-                / l.windowAreaM2();
+        wireFill = turnsPerCoil * w.overallAreaM2() / l.windowAreaM2();
+        fill = l.windowKind() == CoilWindow.Kind.SLOTTED ? turnsPerCoil * w.copperAreaM2() / l.windowAreaM2() : wireFill;
         copperMassKg = Copper.DENSITY_KG_PER_M3 * (lengthM * w.copperAreaM2()) * 3;
         magnetMassKg = l.magnetMassKg();
         conductorAreaM2 = w.copperAreaM2();

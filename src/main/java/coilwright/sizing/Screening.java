@@ -5,7 +5,6 @@ import java.util.List;
 import java.util.concurrent.CancellationException;
 import java.util.concurrent.ForkJoinPool;
 import java.util.function.BooleanSupplier;
-import java.util.stream.IntStream;
 
 /**
  * Screens every candidate of a space with the closed forms, in parallel over the winding cases. Each candidate is
@@ -123,8 +122,9 @@ final class Screening {
     /** The counts by limit, in screening order. */
     List<LimitCount> counts(Outcome o) {
         List<LimitCount> out = new ArrayList<>();
-        IntStream.range(0, o.pruned.length)
-                .forEach(i -> out.add(new LimitCount(limits.limits().get(i).name(), o.pruned[i])));
+        for (int i = 0; i < o.pruned.length; i++) {
+            out.add(new LimitCount(limits.limits().get(i).name(), o.pruned[i]));
+        }
         return out;
     }
 }

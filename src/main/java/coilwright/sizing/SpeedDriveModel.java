@@ -73,9 +73,9 @@ final class SpeedDriveModel implements DriveModel {
     @Override
     public List<Limit> limits() {
         return List.of(
-                new UpperLimit("cutInSpeed", "drive.cutInSpeedRpm", "rpm", targets.cutInSpeedRpm(),
+                FigureLimit.atMost("cutInSpeed", "drive.cutInSpeedRpm", "rpm", targets.cutInSpeedRpm(),
                         "starts charging at or below %.0f rpm", s -> s.cutInRpm, FullEvaluation::cutInSpeedRpm),
-                new LowerLimit("ratedPower", "drive.ratedPowerW", "W", targets.ratedPowerW(),
+                FigureLimit.atLeast("ratedPower", "drive.ratedPowerW", "W", targets.ratedPowerW(),
                         "delivers at least %.0f W at " + Math.round(targets.ratedSpeedRpm()) + " rpm",
                         this::ratedPowerBoundW, FullEvaluation::ratedPowerW));
     }

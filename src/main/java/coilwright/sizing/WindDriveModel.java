@@ -157,7 +157,7 @@ final class WindDriveModel implements DriveModel {
         out.add(new ChargingLimit(topSpeedRpm[topSpeedRpm.length - 1], String.format(Locale.ROOT,
                 "the highest speed the rotor reaches up to %.1f m/s", drive.maxWindSpeedMs())));
         if (maxCutInWindSpeedMs > 0) {
-            out.add(new UpperLimit("cutInWindSpeed", "limits.maxCutInWindSpeedMs", "m/s", maxCutInWindSpeedMs, "reaches cut-in at %.1f m/s with this rotor",
+            out.add(FigureLimit.atMost("cutInWindSpeed", "limits.maxCutInWindSpeedMs", "m/s", maxCutInWindSpeedMs, "reaches cut-in at %.1f m/s with this rotor",
                     this::cutInWindBoundMs, FullEvaluation::cutInWindSpeedMs));
         }
         return out;

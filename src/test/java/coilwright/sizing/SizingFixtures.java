@@ -59,10 +59,10 @@ final class SizingFixtures {
                 WindRegime.rayleigh(5.0), 25, 10);
     }
 
-    /** A 2 m rotor furling at 600 rpm, direct drive, on a 4.5 m/s site. */
+    /** A 2 m rotor furling at 600 rpm, direct drive, on a 4.5 m/s site, rated at 8 m/s. */
     static WindDrive wind2m() {
         return new WindDrive(new WindRotor(2.0, 3, new ParametricCp(0.38, 6.0), 600, 1.0, 1.0), WindSite.standard(),
-                WindRegime.rayleigh(4.5), 25, 10);
+                WindRegime.rayleigh(4.5), 25, 8);
     }
 
     /** A two-jet impulse runner sized for 375 rpm on 30 m gross head, 12 L/s, belted up 2:1, with a flow-duration curve. */
