@@ -25,21 +25,25 @@ import java.util.Map;
  * A hydro site and runner. Full model: {@link HydroMatcher}; the rated point is the matched point at the design
  * flow, with its current density and efficiency from the operating point at the matched speed.
  *
- * <p>Bounds. The matched runner runs at most at its runaway speed (the matcher scans no further) and gives at most
- * its peak shaft power (the power of a straight torque-speed line peaks at its optimum speed); so at each flow the
- * battery power is at most V_b times the smaller of {@link BridgeBounds#maxDcCurrentA} at the runaway speed and
- * {@link BridgeBounds#dcCurrentFromShaftPowerA} at drivetrain efficiency x peak power. The flow-duration sum, whose
- * weights are not negative, carries the bound to the annual energy. The runner and the pipe are solved once per
- * search, at every flow the sum visits, as the matcher solves them.
+ * <p>Bounds. The matched runner runs at most at its runaway speed (the matcher scans no further), and the battery
+ * charges only with the alternator at or above its cut-in speed; a straight torque-speed line gives a power that
+ * rises to its optimum speed and falls after it, so the runner gives at most its power at the optimum speed clamped
+ * into that range. At each flow the battery power is at most V_b times the smaller of
+ * {@link BridgeBounds#maxDcCurrentA} at the runaway speed and {@link BridgeBounds#dcCurrentFromShaftPowerA} at
+ * drivetrain efficiency x that power. The flow-duration sum, whose weights are not negative, carries the bound to
+ * the annual energy. The runner and the pipe are solved once per search, at every flow the sum visits, as the
+ * matcher solves them.
  */
 final class HydroDriveModel implements DriveModel {
     private final HydroDrive drive;
     private final BatteryLoad load;
     private final LoadConstants lc;
+    private final HydroRunner designRunner;
     private final double designTopRpm;
-    private final double designShaftW;
-    /** Per distinct stream flow of the flow-duration curve: weight (kWh per W), top speed (rpm), shaft power (W). */
-    private final double[][] flows;
+    /** Per distinct stream flow of the flow-duration curve that the plant takes: its weight, kWh per W. */
+    private final double[] flowWeights;
+    /** The runner at each of those flows. */
+    private final HydroRunner[] flowRunners;
 
     HydroDriveModel(HydroDrive drive, BatteryLoad load, LoadConstants lc) {
         this.drive = drive;
@@ -48,31 +52,34 @@ final class HydroDriveModel implements DriveModel {
         Penstock pipe = new Penstock(drive.penstock());
         PenstockResult design = pipe.analyse(drive.site().grossHeadM(), drive.site().designFlowM3s(),
                 drive.waterTempC(), Penstock.DEFAULT_MAX_LOSS_SHARE);
-        HydroRunner runner = drive.runner().at(design.netHeadM(), design.flowM3s());
-        designTopRpm = runner.runawaySpeedRpm() * drive.driveRatio();
-        designShaftW = runner.peakShaftPowerW() * drive.drivetrainEfficiency();
-        flows = drive.site().hasFlowDuration() ? flowTable(pipe, diameterM(runner)) : new double[0][];
+        designRunner = drive.runner().at(design.netHeadM(), design.flowM3s());
+        designTopRpm = designRunner.runawaySpeedRpm() * drive.driveRatio();
+        Map<Double, HydroRunner> byFlow = drive.site().hasFlowDuration() ? flowTable(pipe, diameterM(designRunner))
+                : Map.of();
+        flowWeights = new double[byFlow.size()];
+        flowRunners = new HydroRunner[byFlow.size()];
+        int i = 0;
+        for (Map.Entry<Double, HydroRunner> e : byFlow.entrySet()) {
+            double q = e.getKey();
+            flowWeights[i] = drive.site().annualEnergyKWh(x -> x == q ? 1.0 : 0.0);
+            flowRunners[i++] = e.getValue();
+        }
     }
 
-    private double[][] flowTable(Penstock pipe, double diameterM) {
+    /** The runner at every distinct stream flow the plant takes (none below zero), its diameter fixed. */
+    private Map<Double, HydroRunner> flowTable(Penstock pipe, double diameterM) {
         RunnerDesign fixed = new RunnerDesign(drive.runner().kind(), drive.runner().jetCount(), diameterM,
                 drive.runner().targetSpeedRpm(), drive.runner().peakEfficiency());
-        Map<Double, double[]> byFlow = new LinkedHashMap<>();
+        Map<Double, HydroRunner> byFlow = new LinkedHashMap<>();
         for (FlowDurationPoint p : drive.site().flowDuration()) {
-            byFlow.computeIfAbsent(p.flowM3s(), q -> {
-                double weight = drive.site().annualEnergyKWh(x -> x == q ? 1.0 : 0.0);
-                double flow = Math.min(q, drive.site().designFlowM3s());
-                if (flow <= 0) {
-                    return new double[] {weight, 0, 0};
-                }
+            double flow = Math.min(p.flowM3s(), drive.site().designFlowM3s());
+            if (flow > 0 && !byFlow.containsKey(p.flowM3s())) {
                 double head = pipe.analyse(drive.site().grossHeadM(), flow, drive.waterTempC(),
                         Penstock.DEFAULT_MAX_LOSS_SHARE).netHeadM();
-                HydroRunner r = fixed.at(head, flow);
-                return new double[] {weight, r.runawaySpeedRpm() * drive.driveRatio(),
-                        r.peakShaftPowerW() * drive.drivetrainEfficiency()};
-            });
+                byFlow.put(p.flowM3s(), fixed.at(head, flow));
+            }
         }
-        return byFlow.values().toArray(new double[0][]);
+        return byFlow;
     }
 
     private static double diameterM(HydroRunner r) {
@@ -110,27 +117,32 @@ final class HydroDriveModel implements DriveModel {
 
     @Override
     public double ratedPowerBoundW(ScreenValues s) {
-        return boundW(s, designTopRpm, designShaftW);
+        return boundW(s, designRunner);
     }
 
-    private double boundW(ScreenValues s, double topRpm, double shaftW) {
+    private double boundW(ScreenValues s, HydroRunner r) {
+        double ratio = drive.driveRatio();
+        double topRpm = r.runawaySpeedRpm() * ratio;
+        double lowestRunnerRpm = s.cutInRpm * (1 - Limit.SCREEN_MARGIN) / ratio;
+        if (lowestRunnerRpm >= r.runawaySpeedRpm()) {
+            return 0;
+        }
+        double shaftW = drive.drivetrainEfficiency() * r.powerW(Math.max(lowestRunnerRpm, r.optimumSpeedRpm()));
         return lc.batteryV() * Math.min(s.maxDcCurrentA(topRpm, lc), s.dcCurrentFromShaftPowerA(shaftW, lc));
     }
 
     @Override
     public double energyBoundKWh(ScreenValues s) {
         double sum = 0;
-        for (double[] f : flows) {
-            if (f[0] > 0 && f[1] > 0) {
-                sum += f[0] * boundW(s, f[1], f[2]);
-            }
+        for (int i = 0; i < flowRunners.length; i++) {
+            sum += flowWeights[i] * boundW(s, flowRunners[i]);
         }
         return sum;
     }
 
     @Override
     public boolean hasEnergy() {
-        return flows.length > 0;
+        return drive.site().hasFlowDuration();
     }
 
     @Override

@@ -143,7 +143,7 @@ final class Refiner {
                 batch.add(s.index(order.pop()));
             }
             if (batch.isEmpty()) {
-                return new Front(undominated(front, costs), order.isEmpty());
+                return order.isEmpty() ? new Front(undominated(front, costs), true) : new Front(evaluatedFront(), false);
             }
             evaluate(batch);
             for (long c : batch) {
@@ -157,6 +157,32 @@ final class Refiner {
             progress.update(SizingProgress.Stage.PARETO, evaluated, budget);
         }
         return new Front(undominated(front, costs), true);
+    }
+
+    /**
+     * When the budget ends the sweep early: the designs no other evaluated design beats on both axes, so the user
+     * still sees the trade-off among everything the full model has seen.
+     */
+    private List<Long> evaluatedFront() {
+        List<Long> feasible = cache.keySet().stream().filter(c -> feasible(cache.get(c))).sorted((a, b) -> {
+            FullEvaluation fa = cache.get(a);
+            FullEvaluation fb = cache.get(b);
+            int c = Double.compare(scoring.frontCost(fa), scoring.frontCost(fb));
+            c = c != 0 ? c : Double.compare(scoring.frontValue(fb), scoring.frontValue(fa));
+            return c != 0 ? c : Long.compare(a, b);
+        }).toList();
+        List<Long> front = new ArrayList<>();
+        List<Double> costs = new ArrayList<>();
+        double best = Double.NEGATIVE_INFINITY;
+        for (long c : feasible) {
+            FullEvaluation f = cache.get(c);
+            if (scoring.frontValue(f) > best) {
+                best = scoring.frontValue(f);
+                front.add(c);
+                costs.add(scoring.frontCost(f));
+            }
+        }
+        return undominated(front, costs);
     }
 
     /** Drops a front point whose successor costs the same and gives more. */

@@ -14,7 +14,8 @@ import java.util.OptionalDouble;
  *                        objective's unit (kWh, W, efficiency, kg or cost); empty when proven
  * @param paretoFront     designs meeting every limit that no other beats on both annual energy (or rated output) and
  *                        material cost (or active mass without prices), cheapest first
- * @param paretoComplete  true when the front is the whole front of the space
+ * @param paretoComplete  true when the front is the whole front of the space; false when the budget ran out, and the
+ *                        front is then that of the designs the full model evaluated
  * @param paretoValue     what the front trades: {@code annualEnergyKWh} or {@code ratedPowerW}
  * @param paretoCost      against what: {@code materialCost} or {@code activeMassKg}
  * @param nearMisses      when {@code designs} is empty: for each limit that binds, the closest design that meets the

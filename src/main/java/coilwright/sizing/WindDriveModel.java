@@ -23,19 +23,25 @@ import java.util.Locale;
  * density and efficiency from the operating point at the matched speed of the rated wind.
  *
  * <p>Bounds. At every tabulated wind speed v the matched rotor runs at most at its free-spinning speed (the matcher
- * scans no further) or, when governed, at its speed limit, so the alternator turns at most at n_top(v); and the
- * power into the alternator shaft is at most drivetrain efficiency x 0.5 rho A v^3 x Cp, with Cp its largest value
- * at tip-speed ratios the rotor can reach (for the parametric curve, which rises up to its optimum, Cp at the lower
- * of the optimum and the top tip-speed ratio; for a table, its peak). The battery power is then at most V_b times
- * the smaller of {@link BridgeBounds#maxDcCurrentA} at n_top(v) and {@link BridgeBounds#dcCurrentFromShaftPowerA};
- * summed with the bin method's own weights (which are not negative) it bounds the annual energy.
+ * scans no further) or, when governed, at its speed limit, so the alternator turns at most at n_top(v); and it
+ * charges only at or above its cut-in speed n_c. The power into the alternator shaft is then at most drivetrain
+ * efficiency x 0.5 rho A v^3 x Cp, with Cp its largest value at tip-speed ratios between those of n_c and n_top(v)
+ * (when governed, the alternator takes less than the rotor offers at the speed limit). For the parametric curve,
+ * which rises to its optimum and falls after it, that is Cp at the optimum clamped into the range; for a table, its
+ * peak. The battery power is at most V_b times the smaller of {@link BridgeBounds#maxDcCurrentA} at n_top(v) and
+ * {@link BridgeBounds#dcCurrentFromShaftPowerA}; summed with the bin method's own weights (which are not negative)
+ * it bounds the annual energy.
  */
 final class WindDriveModel implements DriveModel {
     private final WindDrive drive;
     private final BatteryLoad load;
     private final LoadConstants lc;
     private final double[] topSpeedRpm;
-    private final double[] shaftPowerW;
+    /** Drivetrain efficiency x the wind's power through the swept area, per row, W. */
+    private final double[] windShaftW;
+    /** Tip-speed ratio per alternator rpm, per row. */
+    private final double[] tsrPerRpm;
+    private final ParametricCp parametric;
     private final double[] energyWeightKWhPerW;
     private final double checkSpeedRpm;
     private final String checkSpeedSource;
@@ -53,7 +59,9 @@ final class WindDriveModel implements DriveModel {
         double rho = drive.site().effectiveAirDensityKgM3();
         int rows = (int) Math.round(drive.maxWindSpeedMs() / WindMatchRequest.WIND_STEP_MS) + 1;
         topSpeedRpm = new double[rows];
-        shaftPowerW = new double[rows];
+        windShaftW = new double[rows];
+        tsrPerRpm = new double[rows];
+        parametric = rotor.curve() instanceof ParametricCp p ? p : null;
         for (int i = 1; i < rows; i++) {
             double v = i * WindMatchRequest.WIND_STEP_MS;
             double rotorTop = rotor.freeSpinSpeedRpm(v);
@@ -61,10 +69,8 @@ final class WindDriveModel implements DriveModel {
                 rotorTop = Math.min(rotorTop, rotor.maxRotorSpeedRpm());
             }
             topSpeedRpm[i] = rotor.alternatorSpeedRpm(rotorTop);
-            double cp = rotor.curve() instanceof ParametricCp p
-                    ? p.cp(Math.min(p.optimumTipSpeedRatio(), rotor.tipSpeedRatio(v, rotorTop)))
-                    : rotor.curve().maxCp();
-            shaftPowerW[i] = rotor.drivetrainEfficiency() * rotor.windPowerW(v, rho) * cp;
+            windShaftW[i] = rotor.drivetrainEfficiency() * rotor.windPowerW(v, rho);
+            tsrPerRpm[i] = rotor.tipSpeedRatio(v, 1.0) / rotor.driveRatio();
         }
         energyWeightKWhPerW = weights(drive, rows);
         boolean limited = rotor.maxRotorSpeedRpm() > 0;
@@ -121,7 +127,14 @@ final class WindDriveModel implements DriveModel {
     }
 
     private double rowBoundW(ScreenValues s, int row) {
-        double d = Math.min(s.maxDcCurrentA(topSpeedRpm[row], lc), s.dcCurrentFromShaftPowerA(shaftPowerW[row], lc));
+        double top = topSpeedRpm[row];
+        if (top <= s.cutInRpm * (1 - Limit.SCREEN_MARGIN)) {
+            return 0;
+        }
+        double cp = parametric == null ? drive.rotor().curve().maxCp()
+                : parametric.cp(Math.max(s.cutInRpm * (1 - Limit.SCREEN_MARGIN) * tsrPerRpm[row],
+                Math.min(parametric.optimumTipSpeedRatio(), top * tsrPerRpm[row])));
+        double d = Math.min(s.maxDcCurrentA(top, lc), s.dcCurrentFromShaftPowerA(windShaftW[row] * cp, lc));
         return lc.batteryV() * d;
     }
 
@@ -129,9 +142,7 @@ final class WindDriveModel implements DriveModel {
     public double energyBoundKWh(ScreenValues s) {
         double sum = 0;
         for (int i = 1; i < topSpeedRpm.length; i++) {
-            if (topSpeedRpm[i] > s.cutInRpm * (1 - Limit.SCREEN_MARGIN)) {
-                sum += energyWeightKWhPerW[i] * rowBoundW(s, i);
-            }
+            sum += energyWeightKWhPerW[i] * rowBoundW(s, i);
         }
         return sum;
     }
