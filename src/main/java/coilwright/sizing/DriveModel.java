@@ -34,6 +34,12 @@ interface DriveModel {
     /** An upper bound of the annual energy into the battery, kWh; 0 when the drive gives no annual energy. */
     double energyBoundKWh(ScreenValues s);
 
+    /** An estimate of the power into the battery at the rated point, W: for the order of refinement only. */
+    double ratedPowerEstimateW(ScreenValues s);
+
+    /** An estimate of the annual energy, kWh (0 without one): for the order of refinement only. */
+    double energyEstimateKWh(ScreenValues s);
+
     /** True when the drive gives an annual energy. */
     boolean hasEnergy();
 

@@ -141,6 +141,26 @@ final class HydroDriveModel implements DriveModel {
     }
 
     @Override
+    public double ratedPowerEstimateW(ScreenValues s) {
+        return estimateW(s, designRunner);
+    }
+
+    @Override
+    public double energyEstimateKWh(ScreenValues s) {
+        double sum = 0;
+        for (int i = 0; i < flowRunners.length; i++) {
+            sum += flowWeights[i] * estimateW(s, flowRunners[i]);
+        }
+        return sum;
+    }
+
+    private double estimateW(ScreenValues s, HydroRunner r) {
+        double ratio = drive.driveRatio();
+        double eta = drive.drivetrainEfficiency();
+        return MatchEstimate.batteryPowerW(s, n -> eta * r.powerW(n / ratio), r.runawaySpeedRpm() * ratio, lc);
+    }
+
+    @Override
     public boolean hasEnergy() {
         return drive.site().hasFlowDuration();
     }

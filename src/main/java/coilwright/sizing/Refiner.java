@@ -16,9 +16,10 @@ import java.util.concurrent.ForkJoinPool;
 import java.util.function.BooleanSupplier;
 
 /**
- * Refines screened candidates with the full model, best bound first. A candidate whose bound cannot beat the k-th
- * best design found so far (score, then candidate number) is never refined, so the designs returned are exactly
- * the k best under the full model among all candidates meeting every limit. Candidates are refined in batches of
+ * Refines screened candidates with the full model, most promising first. A candidate whose bound cannot beat the
+ * k-th best design found so far (score, then candidate number) is never refined, and the ranking ends only when no
+ * candidate left can, so the designs returned are exactly the k best under the full model among all candidates
+ * meeting every limit (or, stopped by the budget, the best found, with the bound of what is left). Candidates are refined in batches of
  * a fixed size on the pool; the batches depend only on the request, so the counts and the ranking do not depend on
  * the number of threads.
  */
@@ -61,25 +62,42 @@ final class Refiner {
     record Best(List<Long> candidates, boolean proven, double unexploredScoreBound) {
     }
 
-    /** @param budget most full evaluations in all, counting those already made */
+    /**
+     * Refines in the order of the score estimates, best first, skipping any candidate whose bound cannot enter the
+     * k best found so far, and stops when the highest bound still open cannot either (proven) or at the budget.
+     *
+     * @param budget most full evaluations in all, counting those already made
+     */
     Best best(Survivors s, int k, int budget) {
-        PositionHeap heap = new PositionHeap(s.size(), (a, b) -> {
+        PositionHeap byEstimate = new PositionHeap(s.size(), (a, b) -> {
+            int c = Double.compare(s.scoreEstimate(b), s.scoreEstimate(a));
+            return c != 0 ? c : Long.compare(s.index(a), s.index(b));
+        });
+        PositionHeap byBound = new PositionHeap(s.size(), (a, b) -> {
             int c = Double.compare(s.scoreBound(b), s.scoreBound(a));
             return c != 0 ? c : Long.compare(s.index(a), s.index(b));
         });
+        boolean[] done = new boolean[s.size()];
         List<Long> found = new ArrayList<>();     // best first
         List<Double> scores = new ArrayList<>();
-        while (!heap.isEmpty()) {
-            List<Long> batch = new ArrayList<>();
-            while (!heap.isEmpty() && batch.size() < BATCH && evaluated + batch.size() < budget) {
-                int top = heap.peek();
-                if (found.size() == k && !beats(s.scoreBound(top), s.index(top), scores.get(k - 1), found.get(k - 1))) {
-                    return new Best(List.copyOf(found), true, Double.NaN);
-                }
-                batch.add(s.index(heap.pop()));
+        while (true) {
+            while (!byBound.isEmpty() && done[byBound.peek()]) {
+                byBound.pop();
             }
-            if (batch.isEmpty()) {
-                return new Best(List.copyOf(found), false, s.scoreBound(heap.peek()));
+            if (byBound.isEmpty() || found.size() == k && !beats(s.scoreBound(byBound.peek()),
+                    s.index(byBound.peek()), scores.get(k - 1), found.get(k - 1))) {
+                return new Best(List.copyOf(found), true, Double.NaN);
+            }
+            List<Long> batch = new ArrayList<>();
+            while (!byEstimate.isEmpty() && batch.size() < BATCH && evaluated + batch.size() < budget) {
+                int p = byEstimate.pop();
+                done[p] = true;
+                if (found.size() < k || beats(s.scoreBound(p), s.index(p), scores.get(k - 1), found.get(k - 1))) {
+                    batch.add(s.index(p));
+                }
+            }
+            if (batch.isEmpty() && evaluated >= budget) {
+                return new Best(List.copyOf(found), false, s.scoreBound(byBound.peek()));
             }
             evaluate(batch);
             for (long c : batch) {
@@ -90,7 +108,6 @@ final class Refiner {
             }
             progress.update(SizingProgress.Stage.REFINE, evaluated, budget);
         }
-        return new Best(List.copyOf(found), true, Double.NaN);
     }
 
     private static boolean beats(double bound, long candidate, double score, long holder) {

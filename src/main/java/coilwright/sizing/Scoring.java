@@ -35,6 +35,18 @@ final class Scoring {
         return widen(v);
     }
 
+    /**
+     * The order in which screened candidates are refined, higher first: an estimate of the score where the bound is
+     * loose (energy, output), the bound itself otherwise. It changes only how soon good designs are found.
+     */
+    double scoreEstimate(ScreenValues s) {
+        return switch (objective) {
+            case ANNUAL_ENERGY -> drive.energyEstimateKWh(s);
+            case OUTPUT_AT_RATED -> drive.ratedPowerEstimateW(s);
+            default -> scoreBound(s);
+        };
+    }
+
     /** The score under the full model. */
     double score(FullEvaluation f) {
         return switch (objective) {

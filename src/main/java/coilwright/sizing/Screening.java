@@ -116,7 +116,8 @@ final class Screening {
             }
             return;
         }
-        out.survivors.add(s.index, scoring.scoreBound(s), scoring.frontValueBound(s), scoring.frontCost(s));
+        out.survivors.add(s.index, scoring.scoreBound(s), scoring.scoreEstimate(s), scoring.frontValueBound(s),
+                scoring.frontCost(s));
     }
 
     /** The counts by limit, in screening order. */

@@ -66,6 +66,16 @@ final class SpeedDriveModel implements DriveModel {
     }
 
     @Override
+    public double ratedPowerEstimateW(ScreenValues s) {
+        return lc.batteryV() * MatchEstimate.dcCurrentA(s, targets.ratedSpeedRpm(), lc);
+    }
+
+    @Override
+    public double energyEstimateKWh(ScreenValues s) {
+        return 0;
+    }
+
+    @Override
     public boolean hasEnergy() {
         return false;
     }

@@ -148,6 +148,26 @@ final class WindDriveModel implements DriveModel {
     }
 
     @Override
+    public double ratedPowerEstimateW(ScreenValues s) {
+        return rowEstimateW(s, drive.ratedRow());
+    }
+
+    @Override
+    public double energyEstimateKWh(ScreenValues s) {
+        double sum = 0;
+        for (int i = 1; i < topSpeedRpm.length; i++) {
+            sum += energyWeightKWhPerW[i] * rowEstimateW(s, i);
+        }
+        return sum;
+    }
+
+    private double rowEstimateW(ScreenValues s, int row) {
+        double wind = windShaftW[row];
+        double tsr = tsrPerRpm[row];
+        return MatchEstimate.batteryPowerW(s, n -> wind * drive.rotor().curve().cp(n * tsr), topSpeedRpm[row], lc);
+    }
+
+    @Override
     public boolean hasEnergy() {
         return true;
     }
