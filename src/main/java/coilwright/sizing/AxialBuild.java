@@ -7,9 +7,9 @@ import java.util.List;
 /**
  * A dual-rotor axial-flux alternator with an air-cored coil stator. The magnets sit on a circle as far out as the
  * disc allows (outer edge at the disc radius less the rim margin). The coils lie side by side round the ring: each
- * coil's hole is as wide as a magnet (at most a third of the room per coil, common practice) and its legs take the
- * rest of the room at the magnets' inner radius, less a gap between neighbouring coils; three-phase double-layer
- * layouts only (one coil per coil position).
+ * coil's hole is as wide as a magnet (at most a third of the room per coil) and its legs take the rest of the room
+ * at the magnets' inner radius, less a gap between neighbouring coils, up to half a pole pitch each (common
+ * practice); three-phase double-layer layouts only (one coil per coil position), 3/4 to 3/2 coils per pole.
  *
  * @param discDiametersM      rotor disc diameters to try, m, each 0.1 to 3, 1 to 6 entries (the largest is the size limit)
  * @param rimMarginM          steel left outside the magnets' outer edge, m, 0 to 0.1

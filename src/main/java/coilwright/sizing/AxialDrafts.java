@@ -14,8 +14,9 @@ import java.util.function.Consumer;
 
 /**
  * Proposes the axial-flux layouts of an {@link AxialBuild}: every disc diameter, stator thickness, magnet block and
- * count per pole, pole count and coil count (a multiple of 3 up to 1.5 x poles, so q = Q/(3 x 2p) &lt;= 1/2 as
- * tooth coils need).
+ * count per pole, pole count and coil count, the coil counts being multiples of 3 from 3/4 to 3/2 of the pole
+ * count (q = Q/(3 x 2p) from 1/4 to 1/2, the range of concentrated air-cored windings, common practice): with
+ * fewer coils each would span several poles.
  */
 final class AxialDrafts {
     private AxialDrafts() {
@@ -25,7 +26,7 @@ final class AxialDrafts {
     static long combinations(AxialBuild b) {
         long coilCounts = 0;
         for (int poles = b.minPoles(); poles <= b.maxPoles(); poles += 2) {
-            coilCounts += maxCoils(poles) / 3;
+            coilCounts += Math.max(0, (maxCoils(poles) - minCoils(poles)) / 3 + 1);
         }
         long magnetChoices = b.magnets().stream().mapToLong(m -> m.countsPerPole().size()).sum();
         return b.discDiametersM().size() * (long) b.statorThicknessesM().size() * magnetChoices * coilCounts;
@@ -39,14 +40,14 @@ final class AxialDrafts {
                     for (int count : m.countsPerPole()) {
                         for (int poles = b.minPoles(); poles <= b.maxPoles(); poles += 2) {
                             Optional<AxialDualRotor> rotor = rotor(b, disc, stator, m, count, poles);
-                            for (int coils = 3; coils <= maxCoils(poles); coils += 3) {
+                            for (int coils = minCoils(poles); coils <= maxCoils(poles); coils += 3) {
                                 WindingSpec w = WindingCheck.spec(coils, poles, Layers.DOUBLE);
                                 Optional<LayoutRejection> bad = windings.rejection(w);
                                 if (bad.isEmpty() && rotor.isEmpty()) {
                                     bad = Optional.of(LayoutRejection.MAGNETS_DO_NOT_FIT);
                                 }
                                 Optional<AirCoredStator> coilRing = bad.isEmpty()
-                                        ? stator(rotor.get(), m.widthM(), coils, b.coilGapM()) : Optional.empty();
+                                        ? stator(rotor.get(), m.widthM(), coils, poles, b.coilGapM()) : Optional.empty();
                                 if (bad.isEmpty() && coilRing.isEmpty()) {
                                     bad = Optional.of(LayoutRejection.COILS_DO_NOT_FIT);
                                 }
@@ -69,6 +70,11 @@ final class AxialDrafts {
         return Math.min(coilwright.winding.WindingSpec.MAX_SLOTS, 3 * poles / 2);
     }
 
+    /** The smallest multiple of 3 at or above 3/4 of the poles (and at least 3). */
+    private static int minCoils(int poles) {
+        return Math.max(3, 3 * (int) Math.ceil(poles / 4.0));
+    }
+
     /** Magnets with their outer edge at the disc radius less the rim margin; empty when they do not fit. */
     private static Optional<AxialDualRotor> rotor(AxialBuild b, double discM, double statorM, MagnetOption m, int count,
                                                   int poles) {
@@ -86,14 +92,18 @@ final class AxialDrafts {
 
     /**
      * Coils side by side round the ring: the hole as wide as a magnet but at most a third of the room per coil, the
-     * two legs sharing the rest at the magnets' inner radius (this project's layout rule, common practice for
-     * air-cored stators); empty when the legs would be thinner than 1 mm.
+     * two legs sharing the rest at the magnets' inner radius, each at most half a pole pitch wide there (this
+     * project's layout rule after common practice for air-cored stators: the model takes each leg as a line at its
+     * centre, and a leg half a pole pitch wide already loses about 10 % of its EMF to its own breadth,
+     * sin(pi/4)/(pi/4) = 0.90); empty when the legs would be thinner than 1 mm.
      */
-    private static Optional<AirCoredStator> stator(AxialDualRotor r, double magnetWidthM, int coils, double gapM) {
+    private static Optional<AirCoredStator> stator(AxialDualRotor r, double magnetWidthM, int coils, int poles,
+                                                   double gapM) {
         // a hair under the full circumference, so the ring check never fails on rounding
         double roomInnerM = (2 * Math.PI * r.innerRadiusM() / coils - gapM) * (1 - 1e-9);
-        double holeInnerM = Math.min(magnetWidthM, roomInnerM / 3);
-        double legM = (roomInnerM - holeInnerM) / 2;
+        double legM = Math.min((roomInnerM - Math.min(magnetWidthM, roomInnerM / 3)) / 2,
+                Math.PI * r.innerRadiusM() / poles);
+        double holeInnerM = roomInnerM - 2 * legM;
         double holeOuterM = (2 * Math.PI * r.outerRadiusM() / coils - gapM) * (1 - 1e-9) - 2 * legM;
         try {
             return Optional.of(new AirCoredStator(legM, holeInnerM, holeOuterM));
