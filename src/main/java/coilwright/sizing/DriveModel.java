@@ -19,14 +19,24 @@ interface DriveModel {
     /** The highest cut-in speed a design may have and still meet the drive's limits, rpm. */
     double highestCutInRpm();
 
-    /**
-     * A lower bound of the rms line current at the rated point of a candidate that meets the drive's own limits, A
-     * (0 when none is known).
-     */
-    double ratedLineCurrentFloorA(ScreenValues s);
+    /** The load's constants the bounds use. */
+    LoadConstants constants();
 
-    /** An upper bound of the efficiency at the rated point of a candidate that meets the drive's own limits. */
-    double ratedEfficiencyBound(ScreenValues s);
+    /**
+     * A lower bound of the rms line current at the rated point of a candidate that meets the drive's own limits, A;
+     * none is known (0) where the rated speed is not fixed in advance.
+     */
+    default double ratedLineCurrentFloorA(ScreenValues s) {
+        return 0;
+    }
+
+    /**
+     * An upper bound of the efficiency at the rated point of a candidate that meets the drive's own limits; where the
+     * rated speed is not fixed in advance only the diodes are certain to take their share, V_b / (V_b + 2 V_d).
+     */
+    default double ratedEfficiencyBound(ScreenValues s) {
+        return constants().batteryV() / constants().thresholdV();
+    }
 
     /** An upper bound of the power into the battery at the rated point, W. */
     double ratedPowerBoundW(ScreenValues s);

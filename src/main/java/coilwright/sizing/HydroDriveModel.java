@@ -90,6 +90,11 @@ final class HydroDriveModel implements DriveModel {
     }
 
     @Override
+    public LoadConstants constants() {
+        return lc;
+    }
+
+    @Override
     public double checkSpeedRpm() {
         return designTopRpm;
     }
@@ -104,16 +109,6 @@ final class HydroDriveModel implements DriveModel {
         return designTopRpm;
     }
 
-    @Override
-    public double ratedLineCurrentFloorA(ScreenValues s) {
-        return 0;
-    }
-
-    /** Only the diodes are certain to take their share: V_b / (V_b + 2 V_d). */
-    @Override
-    public double ratedEfficiencyBound(ScreenValues s) {
-        return lc.batteryV() / lc.thresholdV();
-    }
 
     @Override
     public double ratedPowerBoundW(ScreenValues s) {

@@ -20,6 +20,11 @@ final class SpeedDriveModel implements DriveModel {
     }
 
     @Override
+    public LoadConstants constants() {
+        return lc;
+    }
+
+    @Override
     public double checkSpeedRpm() {
         return targets.effectiveMaxSpeedRpm();
     }

@@ -93,6 +93,11 @@ final class WindDriveModel implements DriveModel {
     }
 
     @Override
+    public LoadConstants constants() {
+        return lc;
+    }
+
+    @Override
     public double checkSpeedRpm() {
         return checkSpeedRpm;
     }
@@ -110,16 +115,6 @@ final class WindDriveModel implements DriveModel {
         return topSpeedRpm[Math.min(topSpeedRpm.length - 1, row)];
     }
 
-    @Override
-    public double ratedLineCurrentFloorA(ScreenValues s) {
-        return 0;
-    }
-
-    /** Only the diodes are certain to take their share: V_b / (V_b + 2 V_d). */
-    @Override
-    public double ratedEfficiencyBound(ScreenValues s) {
-        return lc.batteryV() / lc.thresholdV();
-    }
 
     @Override
     public double ratedPowerBoundW(ScreenValues s) {
