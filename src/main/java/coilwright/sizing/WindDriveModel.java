@@ -42,6 +42,10 @@ final class WindDriveModel implements DriveModel {
     /** Tip-speed ratio per alternator rpm, per row. */
     private final double[] tsrPerRpm;
     private final ParametricCp parametric;
+    /** The curve's peak, worked out once (a table's peak is searched for). */
+    private final double maxCp;
+    /** Cp sampled every {@link #CP_STEP} in tip-speed ratio, for the estimates (a table's spline is slow to build). */
+    private final double[] cpSamples;
     private final double[] energyWeightKWhPerW;
     private final double checkSpeedRpm;
     private final String checkSpeedSource;
@@ -50,6 +54,9 @@ final class WindDriveModel implements DriveModel {
     /**
      * @param maxCutInWindSpeedMs the cut-in wind limit, m/s; 0 = none
      */
+    /** Tip-speed ratio step of the sampled Cp curve. */
+    private static final double CP_STEP = 0.02;
+
     WindDriveModel(WindDrive drive, BatteryLoad load, LoadConstants lc, double maxCutInWindSpeedMs) {
         this.drive = drive;
         this.maxCutInWindSpeedMs = maxCutInWindSpeedMs;
@@ -62,6 +69,11 @@ final class WindDriveModel implements DriveModel {
         windShaftW = new double[rows];
         tsrPerRpm = new double[rows];
         parametric = rotor.curve() instanceof ParametricCp p ? p : null;
+        maxCp = rotor.curve().maxCp();
+        cpSamples = new double[(int) Math.ceil(rotor.curve().runawayTipSpeedRatio() / CP_STEP) + 2];
+        for (int k = 0; k < cpSamples.length; k++) {
+            cpSamples[k] = rotor.curve().cp(k * CP_STEP);
+        }
         for (int i = 1; i < rows; i++) {
             double v = i * WindMatchRequest.WIND_STEP_MS;
             double rotorTop = rotor.freeSpinSpeedRpm(v);
@@ -126,7 +138,7 @@ final class WindDriveModel implements DriveModel {
         if (top <= s.cutInRpm * (1 - Limit.SCREEN_MARGIN)) {
             return 0;
         }
-        double cp = parametric == null ? drive.rotor().curve().maxCp()
+        double cp = parametric == null ? maxCp
                 : parametric.cp(Math.max(s.cutInRpm * (1 - Limit.SCREEN_MARGIN) * tsrPerRpm[row],
                 Math.min(parametric.optimumTipSpeedRatio(), top * tsrPerRpm[row])));
         double d = Math.min(s.maxDcCurrentA(top, lc), s.dcCurrentFromShaftPowerA(windShaftW[row] * cp, lc));
@@ -159,7 +171,17 @@ final class WindDriveModel implements DriveModel {
     private double rowEstimateW(ScreenValues s, int row) {
         double wind = windShaftW[row];
         double tsr = tsrPerRpm[row];
-        return MatchEstimate.batteryPowerW(s, n -> wind * drive.rotor().curve().cp(n * tsr), topSpeedRpm[row], lc);
+        return MatchEstimate.batteryPowerW(s, n -> wind * sampledCp(n * tsr), topSpeedRpm[row], lc);
+    }
+
+    /** Cp between the samples, on straight lines; 0 beyond the free-spinning ratio. */
+    private double sampledCp(double tsr) {
+        double k = tsr / CP_STEP;
+        int i = (int) k;
+        if (i >= cpSamples.length - 1) {
+            return 0;
+        }
+        return cpSamples[i] + (k - i) * (cpSamples[i + 1] - cpSamples[i]);
     }
 
     @Override

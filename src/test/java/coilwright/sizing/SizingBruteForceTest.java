@@ -1,5 +1,7 @@
 package coilwright.sizing;
 
+import coilwright.turbine.TableCp;
+import coilwright.turbine.WindRotor;
 import org.junit.jupiter.api.AfterAll;
 import org.junit.jupiter.api.Test;
 
@@ -71,6 +73,17 @@ class SizingBruteForceTest {
     @Test
     void axial_wind_by_annual_energy() {
         assertSearchMatchesBruteForce(SizingFixtures.smallAxialWind(Objective.ANNUAL_ENERGY));
+    }
+
+    @Test
+    void axial_wind_with_a_tabulated_cp_curve_by_rated_output() {
+        SizingRequest small = SizingFixtures.smallAxialWind(Objective.OUTPUT_AT_RATED);
+        WindDrive w = (WindDrive) small.drive();
+        WindRotor tabled = new WindRotor(3.0, 3, new TableCp(new double[] {0, 2, 4, 6, 8, 10, 11},
+                new double[] {0, 0.12, 0.30, 0.40, 0.33, 0.10, 0}), 500, 1.0, 1.0);
+        assertSearchMatchesBruteForce(new SizingRequest(new WindDrive(tabled, w.site(), w.wind(), 25, 10),
+                small.load(), small.build(), small.winding(), small.limits(), small.objective(), small.prices(), 3,
+                10_000));
     }
 
     @Test
