@@ -2,6 +2,9 @@ package coilwright.sizing;
 
 import coilwright.machine.Alternator;
 import coilwright.machine.AlternatorSpec;
+import coilwright.safety.Caution;
+
+import java.util.List;
 
 /**
  * One candidate under the full model. Figures that do not apply to the drive are 0; a wind design that never charges
@@ -22,21 +25,27 @@ import coilwright.machine.AlternatorSpec;
  * @param copperMassKg                 copper of all phases, kg
  * @param magnetMassKg                 magnets, kg
  * @param annualEnergyKWh              energy into the battery per year, kWh (0 without a wind regime or flow-duration curve)
+ * @param cautions                     the safety cautions of the design with its drive and load, most serious first
  */
 record FullEvaluation(AlternatorSpec spec, String refusal, boolean charges, double cutInSpeedRpm,
                       double cutInWindSpeedMs, double ratedSpeedRpm, double ratedPowerW, double ratedEfficiency,
                       double ratedCurrentDensityAPerMm2, double fill, double openCircuitLineRmsV, double maxSpeedRpm,
-                      double copperMassKg, double magnetMassKg, double annualEnergyKWh) {
+                      double copperMassKg, double magnetMassKg, double annualEnergyKWh, List<Caution> cautions) {
+    FullEvaluation {
+        cautions = List.copyOf(cautions);
+    }
 
     /** The full model refused the candidate: no figure can be trusted. */
     static FullEvaluation refused(AlternatorSpec spec, String reason) {
-        return new FullEvaluation(spec, reason, false, 0, Double.POSITIVE_INFINITY, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0);
+        return new FullEvaluation(spec, reason, false, 0, Double.POSITIVE_INFINITY, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0,
+                List.of());
     }
 
     /** Figures of a built machine that never charges in the drive's range. */
-    static FullEvaluation neverCharges(Alternator alt, double cutInRpm, double openCircuitV, double maxSpeedRpm) {
+    static FullEvaluation neverCharges(Alternator alt, double cutInRpm, double openCircuitV, double maxSpeedRpm,
+                                       List<Caution> cautions) {
         return new FullEvaluation(alt.spec(), "", false, cutInRpm, Double.POSITIVE_INFINITY, 0, 0, 0, 0, fillOf(alt),
-                openCircuitV, maxSpeedRpm, alt.copperMassKg(), alt.magnetMassKg(), 0);
+                openCircuitV, maxSpeedRpm, alt.copperMassKg(), alt.magnetMassKg(), 0, cautions);
     }
 
     static double fillOf(Alternator alt) {

@@ -177,12 +177,12 @@ final class HydroDriveModel implements DriveModel {
         HydroOperatingPoint m = r.matched();
         if (m.powerToBatteryW() <= 0) {
             return FullEvaluation.neverCharges(alt, cutIn, r.openCircuitLineRmsVAtRunaway(),
-                    r.runawayAlternatorSpeedRpm());
+                    r.runawayAlternatorSpeedRpm(), r.cautions());
         }
         SpeedPoint rated = AlternatorEvaluator.point(alt, load, m.alternatorSpeedRpm());
         return new FullEvaluation(alt.spec(), "", true, cutIn, 0, rated.speedRpm(), rated.powerToLoadW(),
                 rated.efficiency(), rated.currentDensityAPerMm2(), FullEvaluation.fillOf(alt),
                 r.openCircuitLineRmsVAtRunaway(), r.runawayAlternatorSpeedRpm(), alt.copperMassKg(),
-                alt.magnetMassKg(), r.annualEnergyKWh().orElse(0));
+                alt.magnetMassKg(), r.annualEnergyKWh().orElse(0), r.cautions());
     }
 }

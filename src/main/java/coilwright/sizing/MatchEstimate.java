@@ -9,8 +9,8 @@ import java.util.function.DoubleUnaryOperator;
  * Electronics", ch. 5), which is rough near cut-in; the turbine is matched by bisection on the power balance.
  */
 final class MatchEstimate {
-    /** Halvings of the speed bracket: 1/4096 of it is far finer than the estimate's own accuracy. */
-    private static final int HALVINGS = 12;
+    /** Halvings of the speed bracket: 1/256 of it (a rpm or two) is finer than the estimate's own accuracy. */
+    private static final int HALVINGS = 8;
 
     private MatchEstimate() {
     }
@@ -35,13 +35,22 @@ final class MatchEstimate {
      * @param topRpm        the highest alternator speed the turbine reaches, rpm
      */
     static double batteryPowerW(ScreenValues s, DoubleUnaryOperator turbineShaftW, double topRpm, LoadConstants lc) {
-        double lo = s.cutInRpm;
-        double hi = topRpm;
-        if (hi <= lo) {
+        if (topRpm <= s.cutInRpm) {
             return 0;
         }
+        return lc.batteryV() * dcCurrentA(s, matchRpm(s, turbineShaftW, s.cutInRpm, topRpm, lc), lc);
+    }
+
+    /**
+     * Estimated speed in [fromRpm, topRpm] where the alternator takes what the turbine gives; the top speed when it
+     * never does, rpm.
+     */
+    static double matchRpm(ScreenValues s, DoubleUnaryOperator turbineShaftW, double fromRpm, double topRpm,
+                           LoadConstants lc) {
+        double lo = fromRpm;
+        double hi = topRpm;
         if (shaftPowerW(s, hi, lc) < turbineShaftW.applyAsDouble(hi)) {
-            return lc.batteryV() * dcCurrentA(s, hi, lc);
+            return hi;
         }
         for (int k = 0; k < HALVINGS; k++) {
             double mid = 0.5 * (lo + hi);
@@ -51,6 +60,6 @@ final class MatchEstimate {
                 hi = mid;
             }
         }
-        return lc.batteryV() * dcCurrentA(s, 0.5 * (lo + hi), lc);
+        return 0.5 * (lo + hi);
     }
 }

@@ -23,6 +23,15 @@ final class Scoring {
         this.byCost = prices.known();
     }
 
+    /** Adds a screened candidate to the survivors with its bounds and estimate, each worked out once. */
+    void addSurvivor(ScreenValues s, Survivors out) {
+        double value = frontValueBound(s);
+        boolean same = objective == Objective.ANNUAL_ENERGY || objective == Objective.OUTPUT_AT_RATED
+                && !drive.hasEnergy();
+        double score = same ? value : scoreBound(s);
+        out.add(s.index, score, scoreEstimate(s), value, frontCost(s));
+    }
+
     /** An upper bound of the score of a screened candidate. */
     double scoreBound(ScreenValues s) {
         double v = switch (objective) {

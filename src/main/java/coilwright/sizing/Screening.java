@@ -116,8 +116,7 @@ final class Screening {
             }
             return;
         }
-        out.survivors.add(s.index, scoring.scoreBound(s), scoring.scoreEstimate(s), scoring.frontValueBound(s),
-                scoring.frontCost(s));
+        scoring.addSurvivor(s, out.survivors);
     }
 
     /** The counts by limit, in screening order. */

@@ -1,6 +1,9 @@
 package coilwright.sizing;
 
 import coilwright.machine.AlternatorSpec;
+import coilwright.safety.Caution;
+
+import java.util.List;
 
 /**
  * One proposed alternator. Its {@code alternator} is a complete specification: with the request's load it can be
@@ -11,6 +14,12 @@ import coilwright.machine.AlternatorSpec;
  * @param layout      the geometry and winding layout in words
  * @param alternator  the alternator specification
  * @param figures     its main numbers under the full model
+ * @param cautions    the safety cautions with its drive and load (open-circuit voltage at the highest speed first
+ *                    when it is dangerous), most serious first; they defer to local codes and licensed practice
  */
-public record SizedDesign(int rank, long candidate, String layout, AlternatorSpec alternator, DesignFigures figures) {
+public record SizedDesign(int rank, long candidate, String layout, AlternatorSpec alternator, DesignFigures figures,
+                          List<Caution> cautions) {
+    public SizedDesign {
+        cautions = List.copyOf(cautions);
+    }
 }

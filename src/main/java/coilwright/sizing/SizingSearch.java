@@ -106,7 +106,7 @@ public final class SizingSearch {
                 s.connectionOf(candidate).name().toLowerCase(Locale.ROOT), s.caseOf(candidate).paths(),
                 s.caseOf(candidate).paths() == 1 ? "" : "s");
         return new SizedDesign(rank, candidate, winding, f.spec(),
-                DesignFigures.of(f, p.space().request(), p.drive().hasEnergy()));
+                DesignFigures.of(f, p.space().request(), p.drive().hasEnergy()), f.cautions());
     }
 
     private static List<LimitCount> rejections(Layouts layouts) {

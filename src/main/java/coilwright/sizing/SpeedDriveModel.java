@@ -102,6 +102,8 @@ final class SpeedDriveModel implements DriveModel {
         double cutIn = AlternatorEvaluator.closedFormCutInRpm(alt, load);
         return new FullEvaluation(alt.spec(), "", p.powerToLoadW() > 0, cutIn, 0, rated, p.powerToLoadW(),
                 p.efficiency(), p.currentDensityAPerMm2(), FullEvaluation.fillOf(alt),
-                alt.emfLineRmsV(checkSpeedRpm()), checkSpeedRpm(), alt.copperMassKg(), alt.magnetMassKg(), 0);
+                alt.emfLineRmsV(checkSpeedRpm()), checkSpeedRpm(), alt.copperMassKg(), alt.magnetMassKg(), 0,
+                AlternatorEvaluator.cautionsAt(alt, load, checkSpeedRpm(), checkSpeedSource(), p.powerToLoadW(),
+                        p.dcCurrentA()));
     }
 }

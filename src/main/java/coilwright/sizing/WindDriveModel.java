@@ -46,6 +46,8 @@ final class WindDriveModel implements DriveModel {
     private final double maxCp;
     /** Cp sampled every {@link #CP_STEP} in tip-speed ratio, for the estimates (a table's spline is slow to build). */
     private final double[] cpSamples;
+    /** Rows whose weight is below this share of the heaviest are left out of the estimate. */
+    private final double estimateWeightFloor;
     private final double[] energyWeightKWhPerW;
     private final double checkSpeedRpm;
     private final String checkSpeedSource;
@@ -85,6 +87,7 @@ final class WindDriveModel implements DriveModel {
             tsrPerRpm[i] = rotor.tipSpeedRatio(v, 1.0) / rotor.driveRatio();
         }
         energyWeightKWhPerW = weights(drive, rows);
+        estimateWeightFloor = 1e-4 * java.util.Arrays.stream(energyWeightKWhPerW).max().orElse(0);
         boolean limited = rotor.maxRotorSpeedRpm() > 0;
         checkSpeedRpm = rotor.alternatorSpeedRpm(limited ? rotor.maxRotorSpeedRpm()
                 : rotor.freeSpinSpeedRpm(drive.maxWindSpeedMs()));
@@ -159,11 +162,23 @@ final class WindDriveModel implements DriveModel {
         return rowEstimateW(s, drive.ratedRow());
     }
 
+    /**
+     * The match estimate summed over the table. Rows that carry almost no weight are left out, and each row's search
+     * starts from the speed the previous row settled at (the rotor runs faster in more wind): it is an estimate.
+     */
     @Override
     public double energyEstimateKWh(ScreenValues s) {
         double sum = 0;
+        double fromRpm = s.cutInRpm;
         for (int i = 1; i < topSpeedRpm.length; i++) {
-            sum += energyWeightKWhPerW[i] * rowEstimateW(s, i);
+            if (energyWeightKWhPerW[i] < estimateWeightFloor || topSpeedRpm[i] <= fromRpm) {
+                continue;
+            }
+            double wind = windShaftW[i];
+            double tsr = tsrPerRpm[i];
+            double rpm = MatchEstimate.matchRpm(s, n -> wind * sampledCp(n * tsr), fromRpm, topSpeedRpm[i], lc);
+            sum += energyWeightKWhPerW[i] * lc.batteryV() * MatchEstimate.dcCurrentA(s, rpm, lc);
+            fromRpm = rpm;
         }
         return sum;
     }
@@ -218,7 +233,8 @@ final class WindDriveModel implements DriveModel {
         try {
             r = WindMatching.match(alt, drive.matchRequest(alt.spec(), load));
         } catch (InfeasibleDesignException e) {
-            return FullEvaluation.neverCharges(alt, cutIn, alt.emfLineRmsV(checkSpeedRpm), checkSpeedRpm);
+            return FullEvaluation.neverCharges(alt, cutIn, alt.emfLineRmsV(checkSpeedRpm), checkSpeedRpm,
+                    AlternatorEvaluator.cautionsAt(alt, load, checkSpeedRpm, checkSpeedSource, 0, 0));
         }
         WindMatchPoint ratedWind = r.points().get(drive.ratedRow());
         SpeedPoint rated = AlternatorEvaluator.point(alt, load, ratedWind.alternatorSpeedRpm());
@@ -226,6 +242,6 @@ final class WindDriveModel implements DriveModel {
                 r.cutInWindSpeedMs().orElse(Double.POSITIVE_INFINITY), rated.speedRpm(), rated.powerToLoadW(),
                 rated.efficiency(), rated.currentDensityAPerMm2(), FullEvaluation.fillOf(alt),
                 r.openCircuitLineRmsVAtCheckSpeed(), r.checkSpeedRpm(), alt.copperMassKg(), alt.magnetMassKg(),
-                r.annualEnergy().annualEnergyKWh());
+                r.annualEnergy().annualEnergyKWh(), r.cautions());
     }
 }

@@ -3,6 +3,7 @@ package coilwright.sizing;
 import coilwright.conductor.Cooling;
 import coilwright.conductor.ThermalClass;
 import coilwright.machine.Connection;
+import coilwright.safety.Caution;
 import coilwright.validation.InvalidInputException;
 import org.junit.jupiter.api.AfterAll;
 import org.junit.jupiter.api.Test;
@@ -144,5 +145,14 @@ class SizingSearchTest {
         assertTrue(highVoltage.limits().stream().noneMatch(l -> l.limit().equals("openCircuitVoltage")));
         assertTrue(highVoltage.notes().stream().anyMatch(n -> n.startsWith("No open-circuit limit")
                 && n.contains("at least 60 V")), highVoltage.notes()::toString);
+        // and every design says so among its cautions, first; the low-voltage ones only as a notice
+        for (SizedDesign d : highVoltage.designs()) {
+            assertEquals("OPEN_CIRCUIT_VOLTAGE", d.cautions().get(0).code());
+            assertEquals(Caution.Severity.DANGER, d.cautions().get(0).severity());
+        }
+        for (SizedDesign d : lowVoltage.designs()) {
+            assertTrue(d.cautions().stream().anyMatch(c -> c.code().equals("OPEN_CIRCUIT_VOLTAGE")
+                    && c.severity() == Caution.Severity.NOTICE));
+        }
     }
 }
