@@ -26,6 +26,16 @@ public final class SizingService {
     }
 
     /**
+     * The number of candidates a request makes (its layouts are built, nothing is screened): to decide between an
+     * answer inline and a job.
+     *
+     * @throws coilwright.validation.InvalidInputException when the space is too large or a value is out of range
+     */
+    public long candidateCount(SizingRequest request) {
+        return search.candidateCount(request);
+    }
+
+    /**
      * Runs a search to its end.
      *
      * @throws coilwright.validation.InvalidInputException     when the space is too large (the message says how to

@@ -81,6 +81,16 @@ public final class SizingSearch {
                 p.scoring().frontValueName(), p.scoring().frontCostName(), near, p.limits().applied(), counts, notes);
     }
 
+    /**
+     * The number of candidates a request makes, without screening them (the layouts are drafted and built): for
+     * choosing between an answer inline and a job.
+     *
+     * @throws InvalidInputException as {@link #run(SizingRequest)} when the space is too large
+     */
+    public long candidateCount(SizingRequest request) {
+        return prepare(request, SizingProgress.NONE).space().size();
+    }
+
     /** Everything a search needs before it screens: layouts, space, load constants, drive, limits, scoring. */
     record Prepared(Layouts layouts, SearchSpace space, LoadConstants lc, DriveModel drive, LimitSet limits,
                     Scoring scoring, Screening screening) {

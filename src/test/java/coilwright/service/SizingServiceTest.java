@@ -62,6 +62,7 @@ class SizingServiceTest {
         }
         assertTrue(own.feasible());
         assertTrue(own.provenBest());
+        assertEquals(own.counts().candidatesInSpace(), new SizingService().candidateCount(request()));
     }
 
     @Test
