@@ -61,7 +61,7 @@ public final class App {
         this.database = joinOpening(opening);
         this.services = Services.create(database, Json.mapper());
         AtomicBoolean started = new AtomicBoolean(false);
-        BooleanSupplier ready = () -> started.get() && database.isReachable(2);
+        BooleanSupplier ready = started::get;
         List<Route> table = new ArrayList<>(routeTable(ready, metrics, services));
         table.addAll(extraRoutes);
         this.routes = List.copyOf(table);
@@ -99,7 +99,7 @@ public final class App {
     /** Every route of the service. Handlers are thin and live in {@code coilwright.web}. */
     private static List<Route> routeTable(BooleanSupplier ready, Metrics metrics, Services services) {
         List<Route> r = new ArrayList<>(List.of(
-                Route.get("/health", new HealthHandler(ready)),
+                Route.get("/health", new HealthHandler(ready, services.designs()::isStoreReachable)),
                 Route.get("/metrics", metrics),
                 Route.get("/api/v1/openapi.json", new OpenApiHandler()),
                 Route.get("/", new HomePage())));

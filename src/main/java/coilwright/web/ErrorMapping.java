@@ -1,6 +1,9 @@
 package coilwright.web;
 
 import com.fasterxml.jackson.core.JsonProcessingException;
+import coilwright.service.DesignStoreUnavailableException;
+import coilwright.service.EditNotAllowedException;
+import coilwright.service.NoSuchDesignException;
 import coilwright.validation.InfeasibleDesignException;
 import coilwright.validation.InvalidInputException;
 import io.javalin.config.RoutesConfig;
@@ -34,6 +37,10 @@ public final class ErrorMapping {
                 respond(ctx, problem("infeasible-design", 422, e.getMessage(), ctx).withField(e.field())));
         routes.exception(NotFoundException.class, (e, ctx) -> respond(ctx, problem("not-found", 404, e.getMessage(), ctx)));
         routes.exception(ForbiddenException.class, (e, ctx) -> respond(ctx, problem("forbidden", 403, e.getMessage(), ctx)));
+        routes.exception(NoSuchDesignException.class, (e, ctx) -> respond(ctx, problem("not-found", 404, e.getMessage(), ctx)));
+        routes.exception(EditNotAllowedException.class, (e, ctx) -> respond(ctx, problem("forbidden", 403, e.getMessage(), ctx)));
+        routes.exception(DesignStoreUnavailableException.class, (e, ctx) -> respond(ctx.header("Retry-After", "5"),
+                problem("service-unavailable", 503, e.getMessage(), ctx)));
         routes.exception(HttpResponseException.class, (e, ctx) -> respond(ctx, fromStatus(e.getStatus(), ctx)));
         routes.exception(Exception.class, (e, ctx) -> unexpected(e, ctx));
         routes.error(404, ctx -> respondUnlessDone(ctx, 404));

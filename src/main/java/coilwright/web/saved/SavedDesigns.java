@@ -13,7 +13,7 @@ public final class SavedDesigns {
     public static List<Route> routes(Services services) {
         SavedDesignApi api = new SavedDesignApi(services.designs());
         SavedDesignPages pages = new SavedDesignPages(services.designs());
-        List<Route> all = List.of(
+        return List.of(
                 Route.post("/api/v1/designs", api::create),
                 Route.post("/api/v1/designs/import", api::importFile),
                 Route.post("/api/v1/designs/{designId}/revisions", api::revise),
@@ -36,6 +36,5 @@ public final class SavedDesigns {
                 Route.post("/d/{designId}/revise", pages::revise),
                 Route.get("/compare", pages::compare),
                 Route.get("/demos", pages::demos));
-        return all.stream().map(r -> new Route(r.method(), r.path(), StoreErrors.mapped(r.handler()))).toList();
     }
 }
