@@ -3,6 +3,8 @@ package coilwright.store;
 import javax.sql.DataSource;
 import java.sql.Connection;
 import java.sql.SQLException;
+import java.sql.SQLNonTransientConnectionException;
+import java.sql.SQLTransientConnectionException;
 import java.util.Set;
 
 /**
@@ -62,7 +64,7 @@ final class Transactions {
 
     static boolean isUnavailable(SQLException e) {
         for (Throwable t = e; t != null; t = t.getCause()) {
-            if (t instanceof java.sql.SQLTransientConnectionException || t instanceof java.sql.SQLNonTransientConnectionException) {
+            if (t instanceof SQLTransientConnectionException || t instanceof SQLNonTransientConnectionException) {
                 return true;
             }
             if (t instanceof SQLException s && s.getSQLState() != null
