@@ -187,7 +187,7 @@ public final class App {
         App app;
         try {
             app = create(config).start();
-        } catch (coilwright.store.StoreException e) {
+        } catch (coilwright.store.StoreException | coilwright.validation.InvalidInputException e) {
             System.err.println("coilwright: " + e.getMessage());
             System.exit(1);
             return;
