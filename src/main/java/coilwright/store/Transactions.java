@@ -75,6 +75,11 @@ final class Transactions {
         return false;
     }
 
+    /**
+     * One attempt. Auto-commit is not switched back here: the pool (HikariCP) restores it when the connection is
+     * returned, and a connection that broke mid-transaction would only answer "connection closed", hiding the
+     * failure that says why (a lost database must be told apart from other failures).
+     */
     private <T> T once(Work<T> work) throws SQLException {
         try (Connection c = dataSource.getConnection()) {
             c.setAutoCommit(false);
@@ -89,8 +94,6 @@ final class Transactions {
                     e.addSuppressed(suppressed);
                 }
                 throw e;
-            } finally {
-                c.setAutoCommit(true);
             }
         }
     }

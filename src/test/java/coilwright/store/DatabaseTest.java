@@ -7,6 +7,8 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.sql.Connection;
 import java.sql.ResultSet;
+import java.util.ArrayList;
+import java.util.List;
 import java.util.Optional;
 
 import static org.junit.jupiter.api.Assertions.*;
@@ -43,5 +45,28 @@ class DatabaseTest {
         assertFalse(e.getMessage().contains("hunter2"), e.getMessage());
         assertFalse(e.getMessage().contains("\n") || e.getMessage().contains("\r"), "one line: " + e.getMessage());
         assertTrue(e.getMessage().contains("refused"), "the driver's own reason is kept: " + e.getMessage());
+    }
+
+    @Test
+    void connections_go_back_to_the_pool_in_auto_commit_mode_after_a_transaction() throws Exception {
+        try (Database db = Database.open(DatabaseSettings.h2File(dataDir))) {
+            DesignStore store = new DesignStore(db);
+            for (int i = 0; i < 30; i++) {
+                store.create(new DraftRevision("t" + i, "", "{}", "{}", "test", 1));
+            }
+            List<Connection> all = new ArrayList<>();
+            try {
+                for (int i = 0; i < 10; i++) {
+                    all.add(db.dataSource().getConnection());
+                }
+                for (Connection c : all) {
+                    assertTrue(c.getAutoCommit(), "a pooled connection left in a transaction");
+                }
+            } finally {
+                for (Connection c : all) {
+                    c.close();
+                }
+            }
+        }
     }
 }

@@ -36,8 +36,12 @@ final class TcpProxy implements AutoCloseable {
     synchronized void cut() throws IOException {
         listener.close();
         for (Socket s : open) {
-            s.setSoLinger(true, 0);
-            s.close();
+            try {
+                s.setSoLinger(true, 0);
+            } catch (IOException alreadyClosed) {
+                // its pump closed it a moment ago
+            }
+            closeQuietly(s);
         }
         open.clear();
     }
