@@ -69,7 +69,7 @@ public final class App {
         this.services = examples.map(e -> Services.create(database, Json.mapper(), e))
                 .orElseGet(() -> Services.create(database, Json.mapper()));
         AtomicBoolean started = new AtomicBoolean(false);
-        BooleanSupplier ready = () -> started.get() && database.isReachable(2);
+        BooleanSupplier ready = started::get;
         List<Route> table = new ArrayList<>(routeTable(ready, metrics, services));
         table.addAll(extraRoutes);
         this.routes = List.copyOf(table);
@@ -118,7 +118,7 @@ public final class App {
         RewindPage rewind = new RewindPage(services.rewind(), new FormBinder(binder));
         SavedDesignPages saved = new SavedDesignPages(services.designs());
         return List.of(
-                Route.get("/health", new HealthHandler(ready)),
+                Route.get("/health", new HealthHandler(ready, services.designs()::isStoreReachable)),
                 Route.get("/metrics", metrics),
                 Route.get("/api/v1/openapi.json", new OpenApiHandler()),
                 // JSON API: designs, windings, catalogues, examples
@@ -252,7 +252,7 @@ public final class App {
         App app;
         try {
             app = create(config).start();
-        } catch (coilwright.store.StoreException e) {
+        } catch (coilwright.store.StoreException | coilwright.validation.InvalidInputException e) {
             System.err.println("coilwright: " + e.getMessage());
             System.exit(1);
             return;

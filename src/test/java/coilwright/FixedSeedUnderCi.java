@@ -50,7 +50,7 @@ public final class FixedSeedUnderCi implements AroundPropertyHook {
     }
 
     /** The fixed seed to use, if any: the named one, else the CI seed under CI, else none (random). */
-    static Optional<String> chosenSeed(java.util.Map<String, String> env) {
+    public static Optional<String> chosenSeed(java.util.Map<String, String> env) {
         String named = env.get("COILWRIGHT_TEST_SEED");
         if (named != null && !named.isBlank()) {
             return Optional.of(named.trim());

@@ -4,9 +4,8 @@ import coilwright.store.DemoDesign;
 import coilwright.store.DesignNotFoundException;
 import coilwright.store.DesignStore;
 import coilwright.store.DraftRevision;
-import coilwright.store.RevisionSummary;
-import coilwright.store.SaveOutcome;
-import coilwright.store.StoredRevision;
+import coilwright.store.EditForbiddenException;
+import coilwright.store.StoreUnavailableException;
 import coilwright.system.AlternatorEvaluation;
 import coilwright.system.EvaluationRequest;
 import coilwright.validation.InfeasibleDesignException;
@@ -14,32 +13,37 @@ import coilwright.validation.InvalidInputException;
 import com.fasterxml.jackson.core.JsonProcessingException;
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
+import com.github.benmanes.caffeine.cache.Cache;
+import com.github.benmanes.caffeine.cache.Caffeine;
 import org.slf4j.Logger;
 import org.slf4j.LoggerFactory;
 
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
-import java.util.concurrent.ConcurrentHashMap;
+import java.util.function.Supplier;
 
 /**
  * Saved designs as the pages and the API see them. Saving evaluates the design, keeps the results the author saw
  * as a JSON snapshot and stores input, snapshot and tool version as one immutable revision. The input is stored as
- * canonical JSON (the request record written by the shared mapper, fields in declared order), so the same
- * input always gives the same ids. Reading never recomputes the saved numbers; {@link #recompute} shows what the
- * current tool makes of the same input.
+ * canonical JSON (the request record written by the shared mapper, fields in declared order). Reading never
+ * recomputes the saved numbers; {@link #recompute} shows what the current tool makes of the same input.
+ *
+ * <p>The store's refusals and failures leave here as this package's exceptions: {@link NoSuchDesignException},
+ * {@link EditNotAllowedException} and {@link DesignStoreUnavailableException}.
  */
 public final class DesignLibrary {
     /** Relative tolerance below which a recomputed number counts as the saved one. */
     public static final double RECOMPUTE_TOLERANCE = 1e-9;
     private static final Logger LOG = LoggerFactory.getLogger(DesignLibrary.class);
-    private static final int CACHE_LIMIT = 512;
+    private static final int RECOMPUTED_CACHE_ENTRIES = 512;
 
     private final EvaluationService evaluation;
     private final DesignStore store;
     private final ObjectMapper mapper;
     private final String toolVersion;
-    private final Map<String, Recomputation> recomputed = new ConcurrentHashMap<>();
+    private final Cache<String, Recomputation> recomputed = Caffeine.newBuilder()
+            .maximumSize(RECOMPUTED_CACHE_ENTRIES).build();
 
     /**
      * @param mapper      the service's JSON mapper (strict, finite numbers only, sealed types with a "type" name)
@@ -71,54 +75,65 @@ public final class DesignLibrary {
     }
 
     /**
-     * Evaluates and saves a new design. Saving the same title, notes and input again returns the same ids
-     * without an edit token.
+     * Evaluates and saves a new design under a new link with its own edit token, even when the same content was
+     * saved before.
      *
      * @throws InvalidInputException      when the design is invalid
      * @throws InfeasibleDesignException  when it cannot be built
      */
-    public SaveOutcome save(DesignDocument document) {
-        return store.create(draft(document));
+    public SaveReceipt save(DesignDocument document) {
+        DraftRevision draft = draft(document);
+        return stored(() -> SaveReceipt.of(store.create(draft)));
     }
 
     /**
-     * Evaluates {@code document} and adds it as the next revision of a design.
+     * Adds {@code document} as the next revision of a design. The edit token is checked before the document is
+     * evaluated, so a refused request costs no evaluation.
      *
-     * @throws DesignNotFoundException             for an unknown design
-     * @throws coilwright.store.EditForbiddenException for a missing or wrong edit token (nothing changes)
+     * @throws NoSuchDesignException   for an unknown design
+     * @throws EditNotAllowedException for a missing or wrong edit token (nothing is evaluated or changed)
      */
-    public SaveOutcome revise(String designId, String editToken, DesignDocument document) {
-        latest(designId);
-        return store.addRevision(designId, editToken, draft(document));
+    public SaveReceipt revise(String designId, String editToken, DesignDocument document) {
+        stored(() -> {
+            store.checkEditToken(designId, editToken);
+            return designId;
+        });
+        DraftRevision draft = draft(document);
+        return stored(() -> SaveReceipt.of(store.addRevision(designId, editToken, draft)));
     }
 
-    /** @throws DesignNotFoundException for an unknown design */
-    public StoredRevision latest(String designId) {
-        return store.latest(designId).orElseThrow(() -> new DesignNotFoundException(designId));
+    /** @throws NoSuchDesignException for an unknown design */
+    public SavedRevision latest(String designId) {
+        return stored(() -> store.latest(designId)).map(SavedRevision::of).orElseThrow(() -> notFound(designId));
     }
 
-    /** @throws DesignNotFoundException for an unknown revision */
-    public StoredRevision revision(String revisionId) {
-        return store.revision(revisionId).orElseThrow(() -> new DesignNotFoundException(revisionId));
+    /** @throws NoSuchDesignException for an unknown revision */
+    public SavedRevision revision(String revisionId) {
+        return stored(() -> store.revision(revisionId)).map(SavedRevision::of).orElseThrow(() -> notFound(revisionId));
     }
 
     /** A revision by its own id, or a design's latest revision by the design id. */
-    public StoredRevision resolve(String designOrRevisionId) {
-        return store.revision(designOrRevisionId).or(() -> store.latest(designOrRevisionId))
-                .orElseThrow(() -> new DesignNotFoundException(designOrRevisionId));
+    public SavedRevision resolve(String designOrRevisionId) {
+        return stored(() -> store.revision(designOrRevisionId).or(() -> store.latest(designOrRevisionId)))
+                .map(SavedRevision::of).orElseThrow(() -> notFound(designOrRevisionId));
     }
 
     /** The revisions of a design, oldest first. */
-    public List<RevisionSummary> history(String designId) {
-        return store.history(designId);
+    public List<HistoryEntry> history(String designId) {
+        return stored(() -> store.history(designId)).stream().map(HistoryEntry::of).toList();
     }
 
-    public List<DemoDesign> demos() {
-        return store.demos();
+    public List<DemoEntry> demos() {
+        return stored(store::demos).stream().map(DemoEntry::of).toList();
+    }
+
+    /** True when the database of saved designs answers now. */
+    public boolean isStoreReachable() {
+        return store.isReachable();
     }
 
     /** The saved input as a design file. */
-    public DesignDocument document(StoredRevision r) {
+    public DesignDocument document(SavedRevision r) {
         return new DesignDocument(DesignDocument.SCHEMA_VERSION, r.title(), r.notes(), request(r));
     }
 
@@ -132,17 +147,8 @@ public final class DesignLibrary {
     }
 
     /** The current tool's results for a saved input, compared with the saved snapshot (cached per revision). */
-    public Recomputation recompute(StoredRevision r) {
-        Recomputation cached = recomputed.get(r.revisionId());
-        if (cached != null) {
-            return cached;
-        }
-        Recomputation fresh = computeAgain(r);
-        if (recomputed.size() >= CACHE_LIMIT) {
-            recomputed.clear();
-        }
-        recomputed.put(r.revisionId(), fresh);
-        return fresh;
+    public Recomputation recompute(SavedRevision r) {
+        return recomputed.get(r.revisionId(), id -> computeAgain(r));
     }
 
     /**
@@ -155,14 +161,15 @@ public final class DesignLibrary {
      */
     public List<String> loadDemos(Map<String, String> examples) {
         Map<String, DemoDesign> present = new java.util.HashMap<>();
-        store.demos().forEach(d -> present.put(d.slug(), d));
+        stored(store::demos).forEach(d -> present.put(d.slug(), d));
         List<String> loaded = new java.util.ArrayList<>();
         for (Map.Entry<String, String> e : examples.entrySet()) {
             try {
                 DesignDocument doc = mapper.readValue(e.getValue(), DesignDocument.class);
                 DemoDesign old = present.get(e.getKey());
                 if (old == null || !unchanged(revision(old.latestRevisionId()), doc)) {
-                    store.ensureDemo(e.getKey(), draft(doc));
+                    DraftRevision draft = draft(doc);
+                    stored(() -> store.ensureDemo(e.getKey(), draft));
                 }
                 loaded.add(e.getKey());
             } catch (JsonProcessingException | RuntimeException ex) {
@@ -172,7 +179,7 @@ public final class DesignLibrary {
         return loaded;
     }
 
-    private boolean unchanged(StoredRevision latest, DesignDocument doc) {
+    private boolean unchanged(SavedRevision latest, DesignDocument doc) {
         return latest.title().equals(doc.title()) && latest.notes().equals(doc.notes())
                 && latest.inputJson().equals(canonical(doc.design()));
     }
@@ -197,7 +204,7 @@ public final class DesignLibrary {
         }
     }
 
-    private EvaluationRequest request(StoredRevision r) {
+    private EvaluationRequest request(SavedRevision r) {
         try {
             return mapper.readValue(r.inputJson(), EvaluationRequest.class);
         } catch (JsonProcessingException e) {
@@ -206,7 +213,7 @@ public final class DesignLibrary {
         }
     }
 
-    private Recomputation computeAgain(StoredRevision r) {
+    private Recomputation computeAgain(SavedRevision r) {
         JsonNode saved = tree(r.resultJson());
         try {
             JsonNode now = mapper.valueToTree(evaluation.evaluate(request(r)));
@@ -221,7 +228,30 @@ public final class DesignLibrary {
         }
     }
 
-    private Recomputation failed(StoredRevision r, String why) {
+    private Recomputation failed(SavedRevision r, String why) {
         return new Recomputation(r.revisionId(), r.toolVersion(), toolVersion, Optional.empty(), Optional.of(why), List.of());
+    }
+
+    /** Runs a store call and gives its refusals and failures this package's meaning. */
+    private static <T> T stored(Supplier<T> call) {
+        try {
+            return call.get();
+        } catch (DesignNotFoundException e) {
+            throw new NoSuchDesignException(sentence(e.getMessage()) + ".");
+        } catch (EditForbiddenException e) {
+            throw new EditNotAllowedException(sentence(e.getMessage()) + "; nothing was changed.");
+        } catch (StoreUnavailableException e) {
+            LOG.warn("saved designs unavailable: {}", e.getMessage());
+            throw new DesignStoreUnavailableException("Saved designs are unavailable just now because their database "
+                    + "cannot be reached; please try again shortly.", e);
+        }
+    }
+
+    private static NoSuchDesignException notFound(String id) {
+        return new NoSuchDesignException(sentence(new DesignNotFoundException(id).getMessage()) + ".");
+    }
+
+    private static String sentence(String s) {
+        return s.isEmpty() ? s : Character.toUpperCase(s.charAt(0)) + s.substring(1);
     }
 }

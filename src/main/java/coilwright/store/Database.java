@@ -8,6 +8,7 @@ import javax.sql.DataSource;
 import java.sql.Connection;
 import java.sql.SQLException;
 import java.util.Optional;
+import java.util.concurrent.atomic.AtomicBoolean;
 
 /**
  * An open connection pool (HikariCP) over a migrated schema (Flyway, {@code classpath:db/migration}).
@@ -15,9 +16,16 @@ import java.util.Optional;
  * closes the database file.
  */
 public final class Database implements AutoCloseable {
+    /** How long a request waits for a pooled connection before the store is reported unavailable, in ms. */
+    static final long CONNECTION_TIMEOUT_MS = 3_000;
+    private static final long VALIDATION_TIMEOUT_MS = 1_000;
+    private static final long PROBE_REUSE_NANOS = 1_000_000_000L;
     private final DatabaseSettings settings;
     private final HikariDataSource dataSource;
     private final String schemaVersion;
+    private final AtomicBoolean probing = new AtomicBoolean();
+    private volatile boolean lastProbeAnswered = true;
+    private volatile long lastProbeNanos = System.nanoTime() - PROBE_REUSE_NANOS;
 
     private Database(DatabaseSettings settings, HikariDataSource dataSource, String schemaVersion) {
         this.settings = settings;
@@ -41,8 +49,22 @@ public final class Database implements AutoCloseable {
         } catch (StoreException e) {
             throw e;
         } catch (RuntimeException e) {
-            throw new StoreException("cannot open the design store at " + settings.describe() + ": " + e.getMessage(), e);
+            throw new StoreException("cannot open the design store at " + settings.describe() + ": " + reason(e), e);
         }
+    }
+
+    /**
+     * The innermost cause's message, on one line and with any password masked: the driver's own words
+     * ("Connection to 127.0.0.1:1 refused") say more than the layers that wrap them, and a start-up failure
+     * is reported as a single line.
+     */
+    static String reason(Throwable e) {
+        Throwable root = e;
+        while (root.getCause() != null && root.getCause() != root) {
+            root = root.getCause();
+        }
+        String text = root.getMessage() == null ? root.getClass().getSimpleName() : root.getMessage();
+        return text.replaceAll("(?i)(password=)[^&;\\s]*", "$1***").replaceAll("\\s*\\R\\s*", " ").strip();
     }
 
     private static Database openUnchecked(DatabaseSettings settings, Optional<String> targetVersion) {
@@ -56,6 +78,17 @@ public final class Database implements AutoCloseable {
         config.setMaximumPoolSize(10);
         config.setAutoCommit(true);
         config.setTransactionIsolation("TRANSACTION_READ_COMMITTED");
+        // when the database is away, a request waits at most this long for a connection and then answers 503;
+        // the pool keeps trying in the background and serves again as soon as the database answers
+        config.setConnectionTimeout(CONNECTION_TIMEOUT_MS);
+        config.setValidationTimeout(VALIDATION_TIMEOUT_MS);
+        if (settings.isPostgres()) {
+            // seconds; a URL parameter of the same name wins. Without a socket timeout a connection whose
+            // server vanished without a reset would hold its request until the operating system gives up.
+            config.addDataSourceProperty("connectTimeout", "5");
+            config.addDataSourceProperty("socketTimeout", "30");
+            config.addDataSourceProperty("tcpKeepAlive", "true");
+        }
         return new Database(settings, new HikariDataSource(config), version);
     }
 
@@ -89,13 +122,25 @@ public final class Database implements AutoCloseable {
         return schemaVersion;
     }
 
-    /** True when a connection answers within {@code timeoutSeconds} (for a readiness check such as /health). */
+    /**
+     * True when a connection answers within {@code timeoutSeconds} (for a readiness check such as /health). At
+     * most one probe runs at a time and a result is reused for a second, so frequent checks cost the database
+     * nothing and, while it is away, do not queue up behind the pool's connection timeout.
+     */
     public boolean isReachable(int timeoutSeconds) {
-        try (Connection c = dataSource.getConnection()) {
-            return c.isValid(timeoutSeconds);
-        } catch (SQLException e) {
-            return false;
+        long now = System.nanoTime();
+        if (now - lastProbeNanos < PROBE_REUSE_NANOS || !probing.compareAndSet(false, true)) {
+            return lastProbeAnswered;
         }
+        try (Connection c = dataSource.getConnection()) {
+            lastProbeAnswered = c.isValid(timeoutSeconds);
+        } catch (SQLException e) {
+            lastProbeAnswered = false;
+        } finally {
+            lastProbeNanos = System.nanoTime();
+            probing.set(false);
+        }
+        return lastProbeAnswered;
     }
 
     @Override

@@ -5,29 +5,31 @@ import java.nio.ByteBuffer;
 import java.nio.charset.StandardCharsets;
 import java.security.MessageDigest;
 import java.security.NoSuchAlgorithmException;
+import java.security.SecureRandom;
 import java.util.Arrays;
 import java.util.Base64;
 import java.util.regex.Pattern;
 
 /**
- * Content-derived ids: the first 128 bits of a SHA-256 digest, written as 22 characters of URL-safe base64
- * without padding (RFC 4648 section 5). Each kind of id hashes a distinct domain tag, then every field as its
- * UTF-8 length (4 bytes, big-endian) followed by its UTF-8 bytes, so that no two different field tuples share
- * a serialisation.
+ * Ids of designs and revisions: 128 bits written as 22 characters of URL-safe base64 without padding
+ * (RFC 4648 section 5).
  *
  * <ul>
- *   <li>design id: tag {@code coilwright/design/v1}, fields (title, notes, inputJson) of its first revision;</li>
- *   <li>demo design id: tag {@code coilwright/demo/v1}, field (slug);</li>
- *   <li>revision id: tag {@code coilwright/revision/v1}, fields (designId, parentRevisionId or "", title,
- *       notes, inputJson). Including the design id keeps revision ids globally unique even when two designs
- *       hold the same content.</li>
+ *   <li>design and revision ids: 128 random bits from {@link SecureRandom}. They cannot be computed from the
+ *       content, so a link can be neither found by trying likely designs nor taken over by saving the same
+ *       content first;</li>
+ *   <li>demo design id: the first 128 bits of SHA-256 over the tag {@code coilwright/demo/v1} and the slug, each
+ *       written as its UTF-8 length (4 bytes, big-endian) and its UTF-8 bytes. Demos are public, and this keeps
+ *       their links the same on every start and every instance.</li>
  * </ul>
+ * Designs saved before random ids keep the content-derived ids they were given: ids are stored, never recomputed.
  */
 public final class DesignIds {
     /** Length of every design and revision id. */
     public static final int ID_LENGTH = 22;
     private static final Pattern ID = Pattern.compile("[A-Za-z0-9_-]{" + ID_LENGTH + "}");
     private static final Base64.Encoder B64 = Base64.getUrlEncoder().withoutPadding();
+    private static final SecureRandom RANDOM = new SecureRandom();
 
     private DesignIds() {
     }
@@ -37,17 +39,19 @@ public final class DesignIds {
         return id != null && ID.matcher(id).matches();
     }
 
-    static String designId(DraftRevision first) {
-        return digestId("coilwright/design/v1", first.title(), first.notes(), first.inputJson());
+    /** A new design or revision id: 128 random bits. */
+    static String random() {
+        return base64Url(randomBytes(16));
+    }
+
+    static byte[] randomBytes(int n) {
+        byte[] bytes = new byte[n];
+        RANDOM.nextBytes(bytes);
+        return bytes;
     }
 
     static String demoDesignId(String slug) {
         return digestId("coilwright/demo/v1", slug);
-    }
-
-    static String revisionId(String designId, String parentRevisionId, DraftRevision draft) {
-        return digestId("coilwright/revision/v1", designId, parentRevisionId == null ? "" : parentRevisionId,
-                draft.title(), draft.notes(), draft.inputJson());
     }
 
     static String digestId(String tag, String... fields) {
@@ -73,7 +77,7 @@ public final class DesignIds {
     }
 
     /** An id made safe to quote in a message: well-formed ids as they are, anything else shortened and masked. */
-    static String printable(String id) {
+    public static String printable(String id) {
         if (id == null) {
             return "(none)";
         }

@@ -13,17 +13,19 @@ import java.util.Optional;
 import java.util.regex.Pattern;
 
 /**
- * Saved designs: each design is a chain of immutable revisions numbered 1, 2, 3, ... with content-derived ids
+ * Saved designs: each design is a chain of immutable revisions numbered 1, 2, 3, ... with random ids
  * (see {@link DesignIds}). Creating a design hands out its secret edit token once; only that token can add a
  * revision. Nothing here lists designs except the demo designs.
  *
- * <p>Thread-safe. Concurrent creates of the same content yield one design; concurrent revisions of one design
- * are serialised by a row lock ({@code SELECT ... FOR UPDATE}) on the design, so numbers have no gaps or
- * repeats. Ids that are not well-formed are treated as unknown without a query.
+ * <p>Thread-safe, also across processes sharing one database. Concurrent revisions of one design are serialised
+ * by a row lock ({@code SELECT ... FOR UPDATE}) on the design; the schema itself refuses a repeated number
+ * (unique per design) and a gap (every revision after the first names its predecessor's number, a foreign key).
+ * Ids that are not well-formed are treated as unknown without a query.
  */
 public final class DesignStore {
     private static final Pattern SLUG = Pattern.compile("[A-Za-z0-9][A-Za-z0-9._-]{0,99}");
 
+    private final Database database;
     private final Transactions tx;
     private final Clock clock;
 
@@ -32,28 +34,45 @@ public final class DesignStore {
     }
 
     DesignStore(Database database, Clock clock) {
+        this.database = database;
         this.tx = new Transactions(database.dataSource());
         this.clock = clock;
     }
 
     /**
-     * Saves a new design whose first revision is {@code draft}. When a design with exactly this first revision
-     * (same title, notes and input) exists already, returns it instead: same ids, {@code created = false}, and
-     * no edit token.
+     * Saves a new design whose first revision is {@code draft}, under a new random id, and hands out its edit token
+     * (once: only its hash is kept). Saving the same content twice makes two designs, each with its own link and
+     * token, so nobody can claim a link by saving somebody else's content first.
      */
     public SaveOutcome create(DraftRevision draft) {
-        String designId = DesignIds.designId(draft);
-        String revisionId = DesignIds.revisionId(designId, "", draft);
         return tx.inTransaction("saving a design", c -> {
-            if (RevisionRows.head(c, designId, false).isPresent()) {
-                return new SaveOutcome(designId, revisionId, Optional.empty(), false);
-            }
+            // ids are drawn inside the transaction, so a retry after a (vanishingly unlikely) clash draws new ones
+            String designId = DesignIds.random();
+            String revisionId = DesignIds.random();
             String token = EditTokens.newToken();
             Instant now = now();
             RevisionRows.insertDesign(c, designId, EditTokens.hash(token), null, revisionId, now);
             RevisionRows.insertRevision(c, revisionId, designId, 1, null, draft, now);
             return new SaveOutcome(designId, revisionId, Optional.of(token), true);
         });
+    }
+
+    /**
+     * Checks that {@code editToken} allows changing the design, without changing anything: lets a caller refuse a
+     * revision before doing the work of preparing it. {@link #addRevision} checks again.
+     *
+     * @throws DesignNotFoundException when no design has this id
+     * @throws EditForbiddenException  when {@code editToken} is missing or wrong (demo designs accept none)
+     */
+    public void checkEditToken(String designId, String editToken) {
+        if (!DesignIds.isWellFormed(designId)) {
+            throw new DesignNotFoundException(designId);
+        }
+        RevisionRows.DesignHead head = tx.read("checking an edit token", c -> RevisionRows.head(c, designId, false))
+                .orElseThrow(() -> new DesignNotFoundException(designId));
+        if (!EditTokens.matches(editToken, head.editTokenHash())) {
+            throw new EditForbiddenException(designId);
+        }
     }
 
     /**
@@ -123,13 +142,18 @@ public final class DesignStore {
             if (head.isPresent()) {
                 append(c, designId, head.get(), draft);
             } else {
-                String revisionId = DesignIds.revisionId(designId, "", draft);
+                String revisionId = DesignIds.random();
                 Instant now = now();
                 RevisionRows.insertDesign(c, designId, null, slug, revisionId, now);
                 RevisionRows.insertRevision(c, revisionId, designId, 1, null, draft, now);
             }
             return designId;
         });
+    }
+
+    /** True when the database answers now (for /health; at most one probe a second, see {@link Database}). */
+    public boolean isReachable() {
+        return database.isReachable(2);
     }
 
     /** The demo designs, by slug: the only listing the store offers. */
@@ -145,7 +169,7 @@ public final class DesignStore {
         if (draft.sameContentAs(latest.title(), latest.notes(), latest.inputJson())) {
             return new SaveOutcome(designId, latest.revisionId(), Optional.empty(), false);
         }
-        String revisionId = DesignIds.revisionId(designId, head.latestRevisionId(), draft);
+        String revisionId = DesignIds.random();
         int number = head.latestNumber() + 1;
         RevisionRows.insertRevision(c, revisionId, designId, number, head.latestRevisionId(), draft, now());
         RevisionRows.moveHead(c, designId, revisionId, number);

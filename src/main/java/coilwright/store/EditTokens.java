@@ -2,26 +2,22 @@ package coilwright.store;
 
 import java.nio.charset.StandardCharsets;
 import java.security.MessageDigest;
-import java.security.SecureRandom;
 import java.util.Base64;
 import java.util.regex.Pattern;
 
 /**
- * Secret edit tokens: 32 bytes from {@link SecureRandom} as 43 characters of URL-safe base64. Only the
+ * Secret edit tokens: 32 bytes from {@link java.security.SecureRandom} as 43 characters of URL-safe base64. Only the
  * token's SHA-256 digest is stored; a presented token is checked by hashing it and comparing the digests with
  * {@link MessageDigest#isEqual} (constant time).
  */
 final class EditTokens {
-    private static final SecureRandom RANDOM = new SecureRandom();
     private static final Pattern TOKEN = Pattern.compile("[A-Za-z0-9_-]{43}");
 
     private EditTokens() {
     }
 
     static String newToken() {
-        byte[] bytes = new byte[32];
-        RANDOM.nextBytes(bytes);
-        return DesignIds.base64Url(bytes);
+        return DesignIds.base64Url(DesignIds.randomBytes(32));
     }
 
     /** The stored form: SHA-256 of the token's characters, URL-safe base64 (43 characters). */

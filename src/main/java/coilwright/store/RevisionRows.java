@@ -63,8 +63,8 @@ final class RevisionRows {
     static void insertRevision(Connection c, String revisionId, String designId, int number, String parentId,
                                DraftRevision d, Instant now) throws SQLException {
         try (PreparedStatement ps = c.prepareStatement("INSERT INTO revision (revision_id, design_id, revision_number, "
-                + "parent_revision_id, title, notes, input_json, result_json, tool_version, schema_version, created_at) "
-                + "VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)")) {
+                + "parent_revision_id, title, notes, input_json, result_json, tool_version, schema_version, created_at, "
+                + "previous_number) VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)")) {
             ps.setString(1, revisionId);
             ps.setString(2, designId);
             ps.setInt(3, number);
@@ -76,6 +76,11 @@ final class RevisionRows {
             ps.setString(9, d.toolVersion());
             ps.setInt(10, d.schemaVersion());
             ps.setObject(11, utc(now));
+            if (number > 1) {
+                ps.setInt(12, number - 1);
+            } else {
+                ps.setNull(12, java.sql.Types.INTEGER);
+            }
             ps.executeUpdate();
         }
     }

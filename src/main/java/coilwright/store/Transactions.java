@@ -3,6 +3,8 @@ package coilwright.store;
 import javax.sql.DataSource;
 import java.sql.Connection;
 import java.sql.SQLException;
+import java.sql.SQLNonTransientConnectionException;
+import java.sql.SQLTransientConnectionException;
 import java.util.Set;
 
 /**
@@ -10,9 +12,15 @@ import java.util.Set;
  * written by a concurrent transaction (the retry then finds the other's row), a lock timeout, a deadlock or a
  * serialization failure. SQL states: 23505 unique violation, 40001 serialization failure or deadlock (H2,
  * PostgreSQL), 40P01 deadlock (PostgreSQL), HYT00 lock timeout and 90131 concurrent update (H2).
+ *
+ * <p>A failure to reach the database is reported as {@link StoreUnavailableException} and not retried here (the
+ * caller answers at once that the store is unavailable): JDBC's connection exceptions, SQL state class 08
+ * (connection exception), 57P01 to 57P03 (PostgreSQL shutting down or not yet accepting connections) and 53300
+ * (too many connections).
  */
 final class Transactions {
     private static final Set<String> TRANSIENT = Set.of("23505", "40001", "40P01", "HYT00", "90131");
+    private static final Set<String> UNAVAILABLE = Set.of("57P01", "57P02", "57P03", "53300");
     private static final int MAX_ATTEMPTS = 8;
 
     @FunctionalInterface
@@ -33,7 +41,7 @@ final class Transactions {
                 return once(work);
             } catch (SQLException e) {
                 if (attempt >= MAX_ATTEMPTS || !isTransient(e)) {
-                    throw new StoreException(what + " failed: " + e.getMessage(), e);
+                    throw failure(what, e);
                 }
                 pause(attempt);
             }
@@ -45,10 +53,33 @@ final class Transactions {
         try (Connection c = dataSource.getConnection()) {
             return work.run(c);
         } catch (SQLException e) {
-            throw new StoreException(what + " failed: " + e.getMessage(), e);
+            throw failure(what, e);
         }
     }
 
+    static StoreException failure(String what, SQLException e) {
+        String message = what + " failed: " + e.getMessage();
+        return isUnavailable(e) ? new StoreUnavailableException(message, e) : new StoreException(message, e);
+    }
+
+    static boolean isUnavailable(SQLException e) {
+        for (Throwable t = e; t != null; t = t.getCause()) {
+            if (t instanceof SQLTransientConnectionException || t instanceof SQLNonTransientConnectionException) {
+                return true;
+            }
+            if (t instanceof SQLException s && s.getSQLState() != null
+                    && (s.getSQLState().startsWith("08") || UNAVAILABLE.contains(s.getSQLState()))) {
+                return true;
+            }
+        }
+        return false;
+    }
+
+    /**
+     * One attempt. Auto-commit is not switched back here: the pool (HikariCP) restores it when the connection is
+     * returned, and a connection that broke mid-transaction would only answer "connection closed", hiding the
+     * failure that says why (a lost database must be told apart from other failures).
+     */
     private <T> T once(Work<T> work) throws SQLException {
         try (Connection c = dataSource.getConnection()) {
             c.setAutoCommit(false);
@@ -63,8 +94,6 @@ final class Transactions {
                     e.addSuppressed(suppressed);
                 }
                 throw e;
-            } finally {
-                c.setAutoCommit(true);
             }
         }
     }

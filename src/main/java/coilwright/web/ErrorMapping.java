@@ -1,9 +1,10 @@
 package coilwright.web;
 
 import com.fasterxml.jackson.core.JsonProcessingException;
-import coilwright.store.DesignNotFoundException;
-import coilwright.store.EditForbiddenException;
 import coilwright.validation.FieldError;
+import coilwright.service.DesignStoreUnavailableException;
+import coilwright.service.EditNotAllowedException;
+import coilwright.service.NoSuchDesignException;
 import coilwright.validation.InfeasibleDesignException;
 import coilwright.validation.InvalidInputException;
 import coilwright.validation.SolverFailedException;
@@ -44,10 +45,10 @@ public final class ErrorMapping {
                 respond(ctx, problem("malformed-json", 400, e.getMessage(), ctx).withField(e.path())));
         routes.exception(NotFoundException.class, (e, ctx) -> respond(ctx, problem("not-found", 404, e.getMessage(), ctx)));
         routes.exception(ForbiddenException.class, (e, ctx) -> respond(ctx, problem("forbidden", 403, e.getMessage(), ctx)));
-        routes.exception(DesignNotFoundException.class, (e, ctx) ->
-                respond(ctx, problem("not-found", 404, sentence(e.getMessage()) + ".", ctx)));
-        routes.exception(EditForbiddenException.class, (e, ctx) ->
-                respond(ctx, problem("forbidden", 403, sentence(e.getMessage()) + "; nothing was changed.", ctx)));
+        routes.exception(NoSuchDesignException.class, (e, ctx) -> respond(ctx, problem("not-found", 404, e.getMessage(), ctx)));
+        routes.exception(EditNotAllowedException.class, (e, ctx) -> respond(ctx, problem("forbidden", 403, e.getMessage(), ctx)));
+        routes.exception(DesignStoreUnavailableException.class, (e, ctx) -> respond(ctx.header("Retry-After", "5"),
+                problem("service-unavailable", 503, e.getMessage(), ctx)));
         routes.exception(HttpResponseException.class, (e, ctx) -> respond(ctx, fromStatus(e.getStatus(), ctx)));
         routes.exception(Exception.class, (e, ctx) -> unexpected(e, ctx));
         routes.error(404, ctx -> respondUnlessDone(ctx, 404));

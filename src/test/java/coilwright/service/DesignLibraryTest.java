@@ -4,10 +4,8 @@ import coilwright.store.Database;
 import coilwright.store.DatabaseSettings;
 import coilwright.store.DesignStore;
 import coilwright.store.DraftRevision;
-import coilwright.store.EditForbiddenException;
-import coilwright.store.DesignNotFoundException;
 import coilwright.store.SaveOutcome;
-import coilwright.store.StoredRevision;
+import coilwright.validation.InfeasibleDesignException;
 import coilwright.web.Json;
 import coilwright.web.RecordBinder;
 import com.fasterxml.jackson.databind.node.ObjectNode;
@@ -54,8 +52,8 @@ class DesignLibraryTest {
     @Test
     void saving_stores_canonical_input_the_results_snapshot_and_the_tool_version() throws Exception {
         DesignDocument doc = example("axial-wind-24v");
-        SaveOutcome o = library.save(doc);
-        StoredRevision r = library.revision(o.revisionId());
+        SaveReceipt o = library.save(doc);
+        SavedRevision r = library.revision(o.revisionId());
         assertEquals(Json.mapper().writeValueAsString(doc.design()), r.inputJson());
         assertEquals("test-1", r.toolVersion());
         assertEquals(Json.mapper().writeValueAsString(evaluation.evaluate(doc.design())), r.resultJson());
@@ -63,37 +61,54 @@ class DesignLibraryTest {
     }
 
     @Test
-    void the_same_input_written_differently_gets_the_same_ids() throws Exception {
+    void the_same_content_saved_twice_gets_two_links_and_two_tokens_over_one_canonical_input() throws Exception {
         String reordered = EXAMPLES.get("rewound-motor-12v").replace("  ", " ");
         ObjectNode tree = (ObjectNode) Json.mapper().readTree(reordered);
         ObjectNode design = (ObjectNode) tree.remove("design");
         design.set("alternator", design.remove("alternator"));
         tree.set("design", design);
         assertTrue(tree.toString().indexOf("\"alternator\"") > tree.toString().indexOf("\"speedRange\""));
-        SaveOutcome a = library.save(example("rewound-motor-12v"));
-        SaveOutcome b = library.save(binder.bind(tree, DesignDocument.class));
-        assertEquals(a.designId(), b.designId());
-        assertFalse(b.created());
-        assertTrue(b.editToken().isEmpty());
+        SaveReceipt a = library.save(example("rewound-motor-12v"));
+        SaveReceipt b = library.save(binder.bind(tree, DesignDocument.class));
+        assertNotEquals(a.designId(), b.designId(), "each save gets its own link");
+        assertNotEquals(a.revisionId(), b.revisionId());
+        assertTrue(a.created() && b.created());
+        assertNotEquals(a.editToken().orElseThrow(), b.editToken().orElseThrow(), "and its own edit token");
+        assertEquals(library.revision(a.revisionId()).inputJson(), library.revision(b.revisionId()).inputJson(),
+                "the input is stored in one canonical form however it was written");
     }
 
     @Test
     void revising_needs_the_token_and_a_wrong_one_stores_nothing() {
-        SaveOutcome o = library.save(example("radial-hydro-48v"));
+        SaveReceipt o = library.save(example("radial-hydro-48v"));
         DesignDocument changed = new DesignDocument(1, "Retitled", "n", example("radial-hydro-48v").design());
-        assertThrows(EditForbiddenException.class, () -> library.revise(o.designId(), null, changed));
-        assertThrows(EditForbiddenException.class, () -> library.revise(o.designId(), "A".repeat(43), changed));
+        assertThrows(EditNotAllowedException.class, () -> library.revise(o.designId(), null, changed));
+        assertThrows(EditNotAllowedException.class, () -> library.revise(o.designId(), "A".repeat(43), changed));
         assertEquals(1, library.history(o.designId()).size());
-        assertThrows(DesignNotFoundException.class, () -> library.revise("B".repeat(22), o.editToken().get(), changed));
-        SaveOutcome second = library.revise(o.designId(), o.editToken().get(), changed);
+        assertThrows(NoSuchDesignException.class, () -> library.revise("B".repeat(22), o.editToken().get(), changed));
+        SaveReceipt second = library.revise(o.designId(), o.editToken().get(), changed);
         assertTrue(second.created());
         assertEquals("Retitled", library.latest(o.designId()).title());
         assertTrue(library.revision(o.revisionId()).isSuperseded());
     }
 
     @Test
+    void the_edit_token_is_checked_before_the_revision_is_evaluated() throws Exception {
+        SaveReceipt o = library.save(example("radial-hydro-48v"));
+        ObjectNode tree = (ObjectNode) Json.mapper().readTree(EXAMPLES.get("radial-hydro-48v"));
+        ((ObjectNode) tree.at("/design/alternator/winding")).put("slots", 12).put("poles", 12);
+        DesignDocument unbuildable = binder.bind(tree, DesignDocument.class);
+        assertThrows(EditNotAllowedException.class, () -> library.revise(o.designId(), "A".repeat(43), unbuildable),
+                "a wrong token is refused before the design is evaluated");
+        assertThrows(NoSuchDesignException.class, () -> library.revise("C".repeat(22), "A".repeat(43), unbuildable));
+        assertThrows(InfeasibleDesignException.class, () -> library.revise(o.designId(), o.editToken().get(), unbuildable),
+                "with the right token the same document is evaluated, and refused as infeasible");
+        assertEquals(1, library.history(o.designId()).size());
+    }
+
+    @Test
     void a_recomputation_with_the_same_tool_reproduces_every_saved_number() {
-        StoredRevision r = library.revision(library.save(example("axial-wind-24v")).revisionId());
+        SavedRevision r = library.revision(library.save(example("axial-wind-24v")).revisionId());
         Recomputation again = library.recompute(r);
         assertFalse(again.differs(), () -> again.changes().toString());
         assertFalse(again.toolVersionDiffers());

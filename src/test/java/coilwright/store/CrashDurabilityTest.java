@@ -1,5 +1,6 @@
 package coilwright.store;
 
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.condition.EnabledIfSystemProperty;
 import org.junit.jupiter.api.condition.EnabledOnOs;
@@ -24,6 +25,7 @@ import static org.junit.jupiter.api.Assertions.*;
  * and prints each id after its commit; the test kills it mid-stream with SIGKILL
  * ({@link ProcessHandle#destroyForcibly()} on Linux), reopens the file and finds every printed save intact.
  */
+@Tag("slow")
 @EnabledOnOs({OS.LINUX, OS.MAC})
 @Tag("slow")
 class CrashDurabilityTest {

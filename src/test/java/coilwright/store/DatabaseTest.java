@@ -7,6 +7,8 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.sql.Connection;
 import java.sql.ResultSet;
+import java.util.ArrayList;
+import java.util.List;
 import java.util.Optional;
 
 import static org.junit.jupiter.api.Assertions.*;
@@ -18,7 +20,7 @@ class DatabaseTest {
     @Test
     void opening_creates_the_h2_file_in_the_data_directory_at_the_latest_schema_version() throws Exception {
         try (Database db = Database.open(DatabaseSettings.h2File(dataDir))) {
-            assertEquals("2", db.schemaVersion());
+            assertEquals("3", db.schemaVersion());
             assertTrue(db.isReachable(2));
             assertFalse(db.isPostgres());
             try (Connection c = db.dataSource().getConnection();
@@ -30,7 +32,7 @@ class DatabaseTest {
         }
         assertTrue(Files.exists(dataDir.resolve("coilwright.mv.db")));
         try (Database again = Database.open(DatabaseSettings.h2File(dataDir))) {
-            assertEquals("2", again.schemaVersion(), "reopening applies nothing twice");
+            assertEquals("3", again.schemaVersion(), "reopening applies nothing twice");
         }
     }
 
@@ -41,5 +43,30 @@ class DatabaseTest {
         StoreException e = assertThrows(StoreException.class, () -> Database.open(s));
         assertTrue(e.getMessage().contains("127.0.0.1:1/none"), e.getMessage());
         assertFalse(e.getMessage().contains("hunter2"), e.getMessage());
+        assertFalse(e.getMessage().contains("\n") || e.getMessage().contains("\r"), "one line: " + e.getMessage());
+        assertTrue(e.getMessage().contains("refused"), "the driver's own reason is kept: " + e.getMessage());
+    }
+
+    @Test
+    void connections_go_back_to_the_pool_in_auto_commit_mode_after_a_transaction() throws Exception {
+        try (Database db = Database.open(DatabaseSettings.h2File(dataDir))) {
+            DesignStore store = new DesignStore(db);
+            for (int i = 0; i < 30; i++) {
+                store.create(new DraftRevision("t" + i, "", "{}", "{}", "test", 1));
+            }
+            List<Connection> all = new ArrayList<>();
+            try {
+                for (int i = 0; i < 10; i++) {
+                    all.add(db.dataSource().getConnection());
+                }
+                for (Connection c : all) {
+                    assertTrue(c.getAutoCommit(), "a pooled connection left in a transaction");
+                }
+            } finally {
+                for (Connection c : all) {
+                    c.close();
+                }
+            }
+        }
     }
 }

@@ -5,6 +5,9 @@ import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
 
+import java.sql.Connection;
+import java.sql.SQLException;
+import java.sql.Statement;
 import java.time.Instant;
 import java.util.ArrayList;
 import java.util.concurrent.CyclicBarrier;
@@ -96,15 +99,30 @@ abstract class DesignStoreContract {
     }
 
     @Test
-    void saving_the_same_first_revision_twice_returns_the_same_design_without_a_token() {
+    void the_same_content_saved_twice_makes_two_designs_each_with_its_own_link_and_token() {
         SaveOutcome first = store.create(draft("Hydro 3 kW", "n", "{\"headM\":42}"));
         SaveOutcome again = store.create(draft("Hydro 3 kW", "n", "{\"headM\":42}"));
-        assertTrue(first.editToken().isPresent());
-        assertFalse(again.created());
-        assertTrue(again.editToken().isEmpty(), "the token is given only once");
-        assertEquals(first.designId(), again.designId());
-        assertEquals(first.revisionId(), again.revisionId());
+        assertTrue(first.created() && again.created());
+        assertNotEquals(first.designId(), again.designId(), "nobody can claim a link by saving its content first");
+        assertNotEquals(first.revisionId(), again.revisionId());
+        assertNotEquals(first.editToken().orElseThrow(), again.editToken().orElseThrow());
+        assertThrows(EditForbiddenException.class, () -> store.addRevision(first.designId(), again.editToken().get(),
+                draft("taken over", "", "{}")), "one save's token does not open the other");
         assertEquals(1, store.history(first.designId()).size());
+        assertEquals(1, store.history(again.designId()).size());
+    }
+
+    @Test
+    void the_token_check_alone_refuses_a_wrong_token_and_an_unknown_design_and_changes_nothing() {
+        SaveOutcome s = store.create(draft("t", "", "{}"));
+        store.checkEditToken(s.designId(), s.editToken().orElseThrow());
+        assertThrows(EditForbiddenException.class, () -> store.checkEditToken(s.designId(), EditTokens.newToken()));
+        assertThrows(EditForbiddenException.class, () -> store.checkEditToken(s.designId(), null));
+        assertThrows(DesignNotFoundException.class, () -> store.checkEditToken("D".repeat(22), s.editToken().get()));
+        assertThrows(DesignNotFoundException.class, () -> store.checkEditToken("<script>", s.editToken().get()));
+        String demo = store.ensureDemo("demo", draft("demo", "", "{}"));
+        assertThrows(EditForbiddenException.class, () -> store.checkEditToken(demo, EditTokens.newToken()));
+        assertEquals(1, store.history(s.designId()).size());
     }
 
     @Test
@@ -196,6 +214,9 @@ abstract class DesignStoreContract {
             }
             previous = s;
         }
+        assertNotEquals(store.create(draft("design", "", "{\"n\":0}")).designId(),
+                DesignIds.digestId("coilwright/design/v1", "design", "", "{\"n\":0}"),
+                "a new id is not the content hash that earlier versions used");
     }
 
     @Test
@@ -250,30 +271,121 @@ abstract class DesignStoreContract {
 
     @Test
     void a_database_created_at_schema_version_1_migrates_and_keeps_its_designs() throws Exception {
+        openAtVersion("1");
+        String token = EditTokens.newToken();
+        List<String> ids = legacyDesign(TRICKY_TITLE, TRICKY_NOTES, token, 2, null);
+        legacyDesign("demo", "", null, 1, "demo");
+        String longVersion = "9.9.9+" + "b".repeat(60);
+        try (Connection c = database.dataSource().getConnection(); Statement st = c.createStatement()) {
+            assertThrows(SQLException.class, () -> st.executeUpdate("UPDATE revision SET tool_version = '" + longVersion + "'"),
+                    "version 1 of the schema holds tool versions of at most 40 characters");
+        }
+
+        reopen();
+        assertEquals("3", database.schemaVersion());
+        StoredRevision first = store.revision(ids.get(1)).orElseThrow();
+        assertEquals(TRICKY_TITLE, first.title());
+        assertEquals(TRICKY_NOTES, first.notes());
+        assertEquals(1, first.number());
+        assertEquals(ids.get(2), store.latest(ids.get(0)).orElseThrow().revisionId());
+        assertEquals(List.of("demo"), store.demos().stream().map(DemoDesign::slug).toList());
+        SaveOutcome wide = store.create(new DraftRevision("v", "", "{}", "{}", longVersion, 1));
+        assertEquals(longVersion, store.latest(wide.designId()).orElseThrow().toolVersion());
+        store.addRevision(ids.get(0), token, draft("third", "", "{\"r\":3}"));
+        assertEquals(List.of(1, 2, 3), store.history(ids.get(0)).stream().map(RevisionSummary::number).toList());
+    }
+
+    @Test
+    void a_design_saved_under_a_content_derived_id_by_an_earlier_version_keeps_its_link_and_token() throws Exception {
+        openAtVersion("2");
+        String token = EditTokens.newToken();
+        List<String> ids = legacyDesign("old", "kept", token, 1, null);
+        assertEquals(DesignIds.digestId("coilwright/design/v1", "old", "kept", "{\"r\":1}"), ids.get(0));
+        reopen();
+        assertEquals("3", database.schemaVersion());
+        StoredRevision old = store.latest(ids.get(0)).orElseThrow();
+        assertEquals(ids.get(1), old.revisionId());
+        assertEquals("old", old.title());
+        SaveOutcome next = store.addRevision(ids.get(0), token, draft("newer", "", "{\"o\":2}"));
+        assertEquals(ids.get(0), next.designId());
+        assertEquals(List.of(1, 2), store.history(ids.get(0)).stream().map(RevisionSummary::number).toList());
+        assertEquals("old", store.revision(ids.get(1)).orElseThrow().title(), "the old revision link still shows it");
+    }
+
+    private void openAtVersion(String version) throws Exception {
         database.close();
         dispose(settings);
         settings = newDatabase();
-        database = Database.open(settings, Optional.of("1"));
-        assertEquals("1", database.schemaVersion());
-        store = new DesignStore(database);
-        SaveOutcome s = store.create(draft(TRICKY_TITLE, TRICKY_NOTES, "{\"m\":1}"));
-        store.addRevision(s.designId(), s.editToken().orElseThrow(), draft("second", "", "{\"m\":2}"));
-        store.ensureDemo("demo", draft("demo", "", "{\"d\":1}"));
-        StoredRevision first = store.revision(s.revisionId()).orElseThrow();
-        StoredRevision latest = store.latest(s.designId()).orElseThrow();
-        String longVersion = "9.9.9+" + "b".repeat(60);
-        assertThrows(StoreException.class, () -> store.create(new DraftRevision("v", "", "{}", "{}", longVersion, 1)),
-                "version 1 of the schema holds tool versions of at most 40 characters");
+        database = Database.open(settings, Optional.of(version));
+        assertEquals(version, database.schemaVersion());
+    }
 
-        database.close();
-        database = Database.open(settings);
-        store = new DesignStore(database);
-        assertEquals("2", database.schemaVersion());
-        assertEquals(first, store.revision(s.revisionId()).orElseThrow());
-        assertEquals(latest, store.latest(s.designId()).orElseThrow());
-        assertEquals(1, store.demos().size());
-        SaveOutcome wide = store.create(new DraftRevision("v", "", "{}", "{}", longVersion, 1));
-        assertEquals(longVersion, store.latest(wide.designId()).orElseThrow().toolVersion());
+    /**
+     * Writes a design as versions before random ids did (schema 1 or 2): ids derived from the content, revisions
+     * numbered 1..n with inputs {"r":k}. Returns the design id, then the revision ids oldest first.
+     */
+    private List<String> legacyDesign(String title, String notes, String token, int revisions, String demoSlug)
+            throws SQLException {
+        String designId = demoSlug != null ? DesignIds.demoDesignId(demoSlug)
+                : DesignIds.digestId("coilwright/design/v1", title, notes, "{\"r\":1}");
+        List<String> ids = new ArrayList<>(List.of(designId));
+        String parent = "";
+        try (Connection c = database.dataSource().getConnection()) {
+            for (int k = 1; k <= revisions; k++) {
+                String input = "{\"r\":" + k + "}";
+                String revisionId = DesignIds.digestId("coilwright/revision/v1", designId, parent, title, notes, input);
+                try (var ps = c.prepareStatement("INSERT INTO revision (revision_id, design_id, revision_number,"
+                        + " parent_revision_id, title, notes, input_json, result_json, tool_version, schema_version,"
+                        + " created_at) VALUES (?, ?, ?, ?, ?, ?, ?, '{}', '0.0.1', 1, CURRENT_TIMESTAMP)")) {
+                    if (k == 1) {
+                        try (var design = c.prepareStatement("INSERT INTO design (design_id, edit_token_hash, demo_slug,"
+                                + " latest_revision_id, latest_number, created_at) VALUES (?, ?, ?, ?, 1, CURRENT_TIMESTAMP)")) {
+                            design.setString(1, designId);
+                            design.setString(2, token == null ? null : EditTokens.hash(token));
+                            design.setString(3, demoSlug);
+                            design.setString(4, revisionId);
+                            design.executeUpdate();
+                        }
+                    }
+                    ps.setString(1, revisionId);
+                    ps.setString(2, designId);
+                    ps.setInt(3, k);
+                    ps.setString(4, parent.isEmpty() ? null : parent);
+                    ps.setString(5, title);
+                    ps.setString(6, notes);
+                    ps.setString(7, input);
+                    ps.executeUpdate();
+                }
+                try (var head = c.prepareStatement("UPDATE design SET latest_revision_id = ?, latest_number = ? WHERE design_id = ?")) {
+                    head.setString(1, revisionId);
+                    head.setInt(2, k);
+                    head.setString(3, designId);
+                    head.executeUpdate();
+                }
+                ids.add(revisionId);
+                parent = revisionId;
+            }
+        }
+        return ids;
+    }
+
+    @Test
+    void the_schema_itself_refuses_a_repeated_or_a_skipped_revision_number() throws Exception {
+        SaveOutcome s = store.create(draft("t", "", "{}"));
+        store.addRevision(s.designId(), s.editToken().orElseThrow(), draft("t2", "", "{\"x\":2}"));
+        String insert = "INSERT INTO revision (revision_id, design_id, revision_number, parent_revision_id, title, notes,"
+                + " input_json, result_json, tool_version, schema_version, created_at, previous_number) VALUES (?, '"
+                + s.designId() + "', ?, NULL, 't', '', '{}', '{}', 'x', 1, CURRENT_TIMESTAMP, ?)";
+        int[][] refused = {{2, 1}, {4, 3}, {3, 1}, {3, -1}, {1, 0}, {0, -1}};
+        for (int[] numbers : refused) {
+            try (Connection c = database.dataSource().getConnection(); var ps = c.prepareStatement(insert)) {
+                ps.setString(1, DesignIds.random());
+                ps.setInt(2, numbers[0]);
+                ps.setInt(3, numbers[1]);
+                assertThrows(SQLException.class, ps::executeUpdate, "number " + numbers[0] + " after " + numbers[1]);
+            }
+        }
+        assertEquals(List.of(1, 2), store.history(s.designId()).stream().map(RevisionSummary::number).toList());
     }
 
     record Ack(SaveOutcome outcome, DraftRevision expected) {
@@ -317,10 +429,10 @@ abstract class DesignStoreContract {
 
         List<Ack> raceAcks = all.stream().filter(a -> a.expected() == race).toList();
         assertEquals(threads, raceAcks.size());
-        assertEquals(1, raceAcks.stream().filter(a -> a.outcome().created()).count(), "one of the racing creates stores it");
-        assertEquals(1, raceAcks.stream().filter(a -> a.outcome().editToken().isPresent()).count());
-        assertEquals(1, raceAcks.stream().map(a -> a.outcome().designId()).distinct().count());
-        assertEquals(1, store.history(raceAcks.get(0).outcome().designId()).size());
+        assertTrue(raceAcks.stream().allMatch(a -> a.outcome().created() && a.outcome().editToken().isPresent()),
+                "every racing save of the same content is its own design with its own token");
+        assertEquals(threads, raceAcks.stream().map(a -> a.outcome().designId()).distinct().count());
+        assertEquals(threads, raceAcks.stream().map(a -> a.outcome().editToken().get()).distinct().count());
 
         Set<String> revisionIds = new HashSet<>();
         for (Ack a : all) {
@@ -334,7 +446,7 @@ abstract class DesignStoreContract {
                 assertTrue(revisionIds.add(a.outcome().revisionId()), "revision id repeats: " + a.outcome().revisionId());
             }
         }
-        assertEquals(1 + threads * createsPerThread + threads * revisionsPerThread, revisionIds.size());
+        assertEquals(threads + threads * createsPerThread + threads * revisionsPerThread, revisionIds.size());
 
         List<RevisionSummary> history = store.history(shared.designId());
         int expected = 1 + threads * revisionsPerThread;

@@ -19,7 +19,7 @@ import java.security.SecureRandom;
  * PostgreSQL cannot be reached the tests are skipped, unless the environment variable CI is {@code true}: then
  * they fail.
  */
-final class TestDatabases {
+public final class TestDatabases {
     static final String DEFAULT_PG_URL = "jdbc:postgresql://127.0.0.1:5432/test";
     private static final SecureRandom RANDOM = new SecureRandom();
     private static volatile String pgUser;
@@ -31,7 +31,7 @@ final class TestDatabases {
         return DatabaseSettings.h2File(dir);
     }
 
-    static String pgUrl() {
+    public static String pgUrl() {
         String url = System.getenv("COILWRIGHT_TEST_PG_URL");
         return url == null || url.isBlank() ? DEFAULT_PG_URL : url;
     }
@@ -54,7 +54,7 @@ final class TestDatabases {
     }
 
     /** The first of {@code postgres} and the OS user that the server lets in; skips or fails if none. */
-    static synchronized String postgresUser() {
+    public static synchronized String postgresUser() {
         if (pgUser != null) {
             return pgUser;
         }

@@ -2,7 +2,7 @@ package coilwright.web.saved;
 
 import coilwright.service.DesignLibrary;
 import coilwright.service.TreeDiff;
-import coilwright.store.StoredRevision;
+import coilwright.service.SavedRevision;
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.node.JsonNodeFactory;
 import com.fasterxml.jackson.databind.node.ObjectNode;
@@ -25,7 +25,7 @@ record Comparison(Side a, Side b, List<TreeDiff.Difference> inputDifferences, Li
     static final double TOLERANCE = DesignLibrary.RECOMPUTE_TOLERANCE;
 
     record Side(String designId, String revisionId, int number, String title, String toolVersion, String link) {
-        static Side of(StoredRevision r) {
+        static Side of(SavedRevision r) {
             return new Side(r.designId(), r.revisionId(), r.number(), r.title(), r.toolVersion(),
                     "/d/" + r.designId() + "/r/" + r.revisionId());
         }
@@ -42,7 +42,7 @@ record Comparison(Side a, Side b, List<TreeDiff.Difference> inputDifferences, Li
         }
     }
 
-    static Comparison of(DesignLibrary library, StoredRevision ra, StoredRevision rb) {
+    static Comparison of(DesignLibrary library, SavedRevision ra, SavedRevision rb) {
         JsonNode ia = inputOf(library, ra);
         JsonNode ib = inputOf(library, rb);
         JsonNode sa = library.tree(ra.resultJson());
@@ -59,7 +59,7 @@ record Comparison(Side a, Side b, List<TreeDiff.Difference> inputDifferences, Li
     }
 
     /** Title, notes and design input as one tree, so a changed title shows as a difference too. */
-    private static JsonNode inputOf(DesignLibrary library, StoredRevision r) {
+    private static JsonNode inputOf(DesignLibrary library, SavedRevision r) {
         ObjectNode node = JsonNodeFactory.instance.objectNode();
         node.put("title", r.title());
         node.put("notes", r.notes());

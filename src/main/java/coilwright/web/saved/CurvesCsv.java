@@ -7,13 +7,21 @@ import org.apache.commons.csv.CSVPrinter;
 import java.io.IOException;
 import java.io.StringWriter;
 import java.io.UncheckedIOException;
+import java.util.regex.Pattern;
 
 /**
  * Every operating point of a results snapshot as CSV (RFC 4180: comma separated, CRLF line ends, quoted where
  * needed), one row per speed, a header naming each column with its unit, e.g. {@code Power to load (W)}. Numbers are
  * written as saved, at full precision; a field the snapshot lacks is an empty cell.
+ *
+ * <p>A cell that is not a plain number and starts with {@code = + - @}, a tab or a carriage return gets a leading
+ * apostrophe, so a spreadsheet shows it as text instead of running it as a formula (CSV injection, OWASP). Numbers,
+ * negative ones included, are left exactly as they are.
  */
 final class CurvesCsv {
+    private static final String FORMULA_START = "=+-@\t\r";
+    private static final Pattern NUMBER = Pattern.compile("[-+]?(\\d+\\.?\\d*|\\.\\d+)([eE][-+]?\\d+)?");
+
     private CurvesCsv() {
     }
 
@@ -24,7 +32,7 @@ final class CurvesCsv {
             for (JsonNode point : results.path("points")) {
                 for (ResultFigures.Column c : ResultFigures.POINT_COLUMNS) {
                     JsonNode v = point.get(c.field());
-                    csv.print(v == null || v.isNull() ? "" : v.asText());
+                    csv.print(v == null || v.isNull() ? "" : inert(v.asText()));
                 }
                 csv.println();
             }
@@ -32,5 +40,13 @@ final class CurvesCsv {
             throw new UncheckedIOException(e);
         }
         return out.toString();
+    }
+
+    /** The cell's text, with a leading apostrophe when a spreadsheet would read it as a formula. */
+    static String inert(String text) {
+        if (text.isEmpty() || FORMULA_START.indexOf(text.charAt(0)) < 0 || NUMBER.matcher(text).matches()) {
+            return text;
+        }
+        return "'" + text;
     }
 }

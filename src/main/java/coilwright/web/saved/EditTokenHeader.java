@@ -10,6 +10,15 @@ final class EditTokenHeader {
     private EditTokenHeader() {
     }
 
+    /**
+     * Marks a response that shows an edit token: no cache (browser, proxy) may keep it, and no link followed from
+     * the page may carry its address to another site.
+     */
+    static void keepPrivate(Context ctx) {
+        ctx.header("Cache-Control", "no-store");
+        ctx.header("Referrer-Policy", "no-referrer");
+    }
+
     /** The token presented, or null when there is none (the store then refuses the change). */
     static String of(Context ctx) {
         String auth = ctx.header("Authorization");

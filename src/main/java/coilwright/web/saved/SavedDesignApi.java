@@ -2,8 +2,8 @@ package coilwright.web.saved;
 
 import coilwright.service.DesignDocument;
 import coilwright.service.DesignLibrary;
-import coilwright.store.SaveOutcome;
-import coilwright.store.StoredRevision;
+import coilwright.service.SaveReceipt;
+import coilwright.service.SavedRevision;
 import coilwright.validation.FieldError;
 import coilwright.validation.InvalidInputException;
 import coilwright.web.Json;
@@ -40,7 +40,7 @@ public final class SavedDesignApi {
     }
 
     public void design(Context ctx) {
-        StoredRevision latest = library.latest(ctx.pathParam("designId"));
+        SavedRevision latest = library.latest(ctx.pathParam("designId"));
         var lines = library.history(latest.designId()).stream().map(s -> SavedJson.RevisionLine.of(latest.designId(), s)).toList();
         ctx.json(new SavedJson.Design(latest.designId(), latest.revisionId(), lines, view(latest)));
     }
@@ -78,20 +78,21 @@ public final class SavedDesignApi {
                 d.title(), "/d/" + d.designId())).toList());
     }
 
-    private SavedJson.Revision view(StoredRevision r) {
+    private SavedJson.Revision view(SavedRevision r) {
         return SavedJson.Revision.of(r, library.tree(r.inputJson()), library.tree(r.resultJson()));
     }
 
-    private static void answer(Context ctx, SaveOutcome outcome) {
-        ctx.status(outcome.created() ? 201 : 200).json(SavedJson.Saved.of(outcome));
+    private static void answer(Context ctx, SaveReceipt receipt) {
+        receipt.editToken().ifPresent(token -> EditTokenHeader.keepPrivate(ctx));
+        ctx.status(receipt.created() ? 201 : 200).json(SavedJson.Saved.of(receipt));
     }
 
-    private void export(Context ctx, StoredRevision r) {
+    private void export(Context ctx, SavedRevision r) {
         ctx.header("Content-Disposition", "attachment; filename=\"coilwright-" + r.revisionId() + ".json\"");
         ctx.json(library.document(r));
     }
 
-    private void curves(Context ctx, StoredRevision r) {
+    private void curves(Context ctx, SavedRevision r) {
         ctx.header("Content-Disposition", "attachment; filename=\"coilwright-" + r.revisionId() + "-curves.csv\"");
         ctx.contentType("text/csv; charset=utf-8").result(CurvesCsv.of(library.tree(r.resultJson())));
     }

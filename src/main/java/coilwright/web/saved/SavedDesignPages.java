@@ -3,8 +3,8 @@ package coilwright.web.saved;
 import coilwright.service.DesignDocument;
 import coilwright.service.DesignLibrary;
 import coilwright.service.Recomputation;
-import coilwright.store.SaveOutcome;
-import coilwright.store.StoredRevision;
+import coilwright.service.SaveReceipt;
+import coilwright.service.SavedRevision;
 import coilwright.web.Json;
 import coilwright.web.NotFoundException;
 import coilwright.web.RecordBinder;
@@ -33,7 +33,8 @@ public final class SavedDesignPages {
     }
 
     public void save(Context ctx) {
-        SaveOutcome outcome = library.save(binder.bind(submitted(ctx), DesignDocument.class));
+        SaveReceipt outcome = library.save(binder.bind(submitted(ctx), DesignDocument.class));
+        outcome.editToken().ifPresent(token -> EditTokenHeader.keepPrivate(ctx));
         ctx.status(outcome.created() ? 201 : 200).render("saved-created", Map.of("outcome", outcome,
                 "rev", library.revision(outcome.revisionId())));
     }
@@ -51,18 +52,18 @@ public final class SavedDesignPages {
     }
 
     public void print(Context ctx) {
-        StoredRevision r = ofDesign(ctx);
+        SavedRevision r = ofDesign(ctx);
         ctx.render("saved-print", Map.of("rev", r, "results", ResultView.of(library.tree(r.resultJson()))));
     }
 
     public void reviseForm(Context ctx) {
-        StoredRevision r = library.latest(ctx.pathParam("designId"));
+        SavedRevision r = library.latest(ctx.pathParam("designId"));
         ctx.render("saved-revise", Map.of("rev", r, "document", pretty(library.document(r))));
     }
 
     public void revise(Context ctx) {
         DesignDocument doc = binder.bind(submitted(ctx), DesignDocument.class);
-        SaveOutcome o = library.revise(ctx.pathParam("designId"), ctx.formParam("editToken"), doc);
+        SaveReceipt o = library.revise(ctx.pathParam("designId"), ctx.formParam("editToken"), doc);
         ctx.redirect("/d/" + o.designId() + "/r/" + o.revisionId(), io.javalin.http.HttpStatus.SEE_OTHER);
     }
 
@@ -80,7 +81,7 @@ public final class SavedDesignPages {
         ctx.render("saved-demos", Map.of("demos", library.demos()));
     }
 
-    private void show(Context ctx, StoredRevision r, boolean recomputedView) {
+    private void show(Context ctx, SavedRevision r, boolean recomputedView) {
         Recomputation again = library.recompute(r);
         Map<String, Object> model = new HashMap<>();
         model.put("rev", r);
@@ -93,8 +94,8 @@ public final class SavedDesignPages {
     }
 
     /** The revision named in the path, which must belong to the design named in the path. */
-    private StoredRevision ofDesign(Context ctx) {
-        StoredRevision r = library.revision(ctx.pathParam("revisionId"));
+    private SavedRevision ofDesign(Context ctx) {
+        SavedRevision r = library.revision(ctx.pathParam("revisionId"));
         if (!r.designId().equals(ctx.pathParam("designId"))) {
             throw new NotFoundException("The design at this address has no revision " + r.revisionId() + ".");
         }

@@ -2,9 +2,9 @@ package coilwright.web.saved;
 
 import coilwright.service.Recomputation;
 import coilwright.service.TreeDiff;
-import coilwright.store.RevisionSummary;
-import coilwright.store.SaveOutcome;
-import coilwright.store.StoredRevision;
+import coilwright.service.HistoryEntry;
+import coilwright.service.SaveReceipt;
+import coilwright.service.SavedRevision;
 import com.fasterxml.jackson.annotation.JsonInclude;
 import com.fasterxml.jackson.databind.JsonNode;
 
@@ -28,7 +28,7 @@ final class SavedJson {
     /** The answer to a save: the edit token appears only when this call created the design. */
     record Saved(String designId, String revisionId, boolean created,
                  @JsonInclude(JsonInclude.Include.NON_ABSENT) Optional<String> editToken, Links links) {
-        static Saved of(SaveOutcome o) {
+        static Saved of(SaveReceipt o) {
             return new Saved(o.designId(), o.revisionId(), o.created(), o.editToken(), Links.of(o.designId(), o.revisionId()));
         }
     }
@@ -36,7 +36,7 @@ final class SavedJson {
     record Revision(String designId, String revisionId, int number, String title, String notes, String createdAt,
                     String toolVersion, int schemaVersion, String latestRevisionId, boolean newerRevisionExists,
                     JsonNode design, JsonNode results, Links links) {
-        static Revision of(StoredRevision r, JsonNode design, JsonNode results) {
+        static Revision of(SavedRevision r, JsonNode design, JsonNode results) {
             return new Revision(r.designId(), r.revisionId(), r.number(), r.title(), r.notes(), r.createdAt().toString(),
                     r.toolVersion(), r.schemaVersion(), r.latestRevisionId(), r.isSuperseded(), design, results,
                     Links.of(r.designId(), r.revisionId()));
@@ -44,7 +44,7 @@ final class SavedJson {
     }
 
     record RevisionLine(int number, String revisionId, String createdAt, String title, String link) {
-        static RevisionLine of(String designId, RevisionSummary s) {
+        static RevisionLine of(String designId, HistoryEntry s) {
             return new RevisionLine(s.number(), s.revisionId(), s.createdAt().toString(), s.title(),
                     "/d/" + designId + "/r/" + s.revisionId());
         }

@@ -46,7 +46,8 @@ class SavedDesignApiTest {
                 .body("designId", matchesPattern("[A-Za-z0-9_-]{22}"))
                 .body("revisionId", matchesPattern("[A-Za-z0-9_-]{22}"))
                 .body("created", equalTo(true))
-                .body("editToken", matchesPattern("[A-Za-z0-9_-]{43}"));
+                .body("editToken", matchesPattern("[A-Za-z0-9_-]{43}"))
+                .header("Cache-Control", "no-store").header("Referrer-Policy", "no-referrer");
         String id = r.path("designId");
         assertEquals("/d/" + id, r.path("links.design"));
         assertEquals("/d/" + id + "/r/" + r.path("revisionId"), r.path("links.revision"));
@@ -54,14 +55,32 @@ class SavedDesignApiTest {
     }
 
     @Test
-    void saving_the_same_content_again_gives_the_same_ids_and_no_token() {
+    void saving_the_same_content_again_gives_a_link_and_a_token_of_its_own() {
         String doc = SavedFixtures.document("Saved twice");
         Response first = save(doc);
         Response second = save(doc);
-        second.then().statusCode(200).body("created", equalTo(false)).body("$", not(hasKey("editToken")));
-        assertEquals(first.path("designId"), second.<String>path("designId"));
-        assertEquals(first.path("revisionId"), second.<String>path("revisionId"));
+        second.then().statusCode(201).body("created", equalTo(true)).body("editToken", matchesPattern("[A-Za-z0-9_-]{43}"));
+        assertNotEquals(first.path("designId"), second.<String>path("designId"));
+        assertNotEquals(first.path("revisionId"), second.<String>path("revisionId"));
+        assertNotEquals(first.path("editToken"), second.<String>path("editToken"));
+        given().header("X-Edit-Token", second.<String>path("editToken")).contentType("application/json")
+                .body(SavedFixtures.document("Taken over?", "", 30)).post("/api/v1/designs/" + first.path("designId") + "/revisions")
+                .then().statusCode(403);
         OpenApiContract.assertMatches(second, "/api/v1/designs", "POST");
+    }
+
+    @Test
+    void the_edit_token_is_checked_before_the_revision_is_evaluated() {
+        Response saved = save(SavedFixtures.document("Guarded before work"));
+        String id = saved.path("designId");
+        // 12 slots and 12 poles bind as input but cannot be wound (no balanced winding): evaluating it is a 422
+        String unbuildable = SavedFixtures.document("Guarded before work", "x", 30).replaceAll("\"poles\":\\d+", "\"poles\":12");
+        given().header("X-Edit-Token", "A".repeat(43)).contentType("application/json").body(unbuildable)
+                .post("/api/v1/designs/" + id + "/revisions").then().statusCode(403)
+                .body("type", equalTo("/problems/forbidden"));
+        given().header("X-Edit-Token", saved.<String>path("editToken")).contentType("application/json").body(unbuildable)
+                .post("/api/v1/designs/" + id + "/revisions").then().statusCode(422);
+        given().get("/api/v1/designs/" + id).then().body("revisions", hasSize(1));
     }
 
     @Test
@@ -164,7 +183,7 @@ class SavedDesignApiTest {
     }
 
     @Test
-    void export_is_a_design_file_download_that_imports_back_to_the_same_design() {
+    void export_is_a_design_file_download_that_imports_back_as_a_new_design_with_the_same_content() {
         Response saved = save(SavedFixtures.document("Exported", "Round trip.", 37));
         String id = saved.path("designId");
         Response export = given().get("/api/v1/designs/" + id + "/export");
@@ -174,7 +193,11 @@ class SavedDesignApiTest {
                 .body("design.alternator.turnsPerCoil", equalTo(37));
         OpenApiContract.assertMatches(export, "/api/v1/designs/{designId}/export", "GET");
         Response back = given().contentType("application/json").body(export.asString()).post("/api/v1/designs/import");
-        back.then().statusCode(200).body("designId", equalTo(id)).body("created", equalTo(false));
+        back.then().statusCode(201).body("designId", not(equalTo(id))).body("created", equalTo(true))
+                .header("Cache-Control", "no-store");
+        given().get("/api/v1/designs/" + back.path("designId") + "/export").then().statusCode(200)
+                .body("title", equalTo("Exported")).body("notes", equalTo("Round trip."))
+                .body("design", equalTo(export.path("design")));
         Response multipart = given().multiPart("file", "design.json",
                 SavedFixtures.document("Uploaded").getBytes(java.nio.charset.StandardCharsets.UTF_8), "application/json")
                 .post("/api/v1/designs/import");

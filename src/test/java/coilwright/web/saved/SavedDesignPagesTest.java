@@ -74,16 +74,39 @@ class SavedDesignPagesTest {
     }
 
     @Test
-    void the_save_form_shows_the_edit_token_once_with_a_warning() {
+    void an_imported_design_file_with_markup_in_title_and_notes_is_shown_inert_on_every_page() {
+        String notes = NOTES + "</textarea><script>alert('ta')</script>";
+        byte[] file = SavedFixtures.document(TITLE, notes, 37).getBytes(java.nio.charset.StandardCharsets.UTF_8);
+        Response imported = given().multiPart("file", "evil.json", file, "application/json").post("/api/v1/designs/import");
+        imported.then().statusCode(201);
+        String id = imported.path("designId");
+        String rev = imported.path("revisionId");
+        String page = given().multiPart("file", "evil.json", file, "application/json").post("/saved")
+                .then().statusCode(201).extract().asString();
+        assertInert(page, "POST /saved with a file");
+        String other = saveApi(SavedFixtures.document("Plain", "", 40)).path("revisionId");
+        for (String path : List.of("/d/" + id, "/d/" + id + "/r/" + rev, "/d/" + id + "/r/" + rev + "/print",
+                "/d/" + id + "/r/" + rev + "/recomputed", "/compare?a=" + rev + "&b=" + other, "/compare?a=" + other + "&b=" + id)) {
+            String html = given().get(path).then().statusCode(200).contentType(startsWith("text/html")).extract().asString();
+            assertInert(html, path);
+            assertFalse(html.contains("<script>alert('ta')"), path + " lets the notes close a textarea and run a script");
+        }
+        String revise = given().get("/d/" + id + "/revise").then().statusCode(200).extract().asString();
+        assertFalse(revise.contains("</textarea><script>"), "the revise form's textarea is not closed by the notes");
+        assertTrue(revise.contains("&lt;/textarea&gt;&lt;script&gt;"), "the file is shown as text in the textarea");
+    }
+
+    @Test
+    void the_save_form_shows_the_edit_token_once_with_a_warning_and_keeps_it_out_of_caches_and_referrers() {
         Response r = given().formParam("document", SavedFixtures.document("Saved from a form")).post("/saved");
         r.then().statusCode(201).contentType(startsWith("text/html"))
+                .header("Cache-Control", "no-store").header("Referrer-Policy", "no-referrer")
                 .body(containsString("Copy it now and keep it safe."))
                 .body(containsString("id=\"edit-token\""));
         Matcher m = Pattern.compile("<code id=\"edit-token\">([A-Za-z0-9_-]{43})</code>").matcher(r.asString());
         assertTrue(m.find(), r.asString());
         Response again = given().formParam("document", SavedFixtures.document("Saved from a form")).post("/saved");
-        again.then().statusCode(200).body(containsString("already saved")).body(not(containsString("id=\"edit-token\"")))
-                .body(not(containsString(m.group(1))));
+        again.then().statusCode(201).body(containsString("id=\"edit-token\"")).body(not(containsString(m.group(1))));
     }
 
     @Test

@@ -1,10 +1,10 @@
 package coilwright.web.saved;
 
 import coilwright.App;
+import coilwright.service.DemoEntry;
 import coilwright.service.DesignDocument;
 import coilwright.service.EvaluationService;
 import coilwright.service.ExampleFiles;
-import coilwright.store.DemoDesign;
 import coilwright.web.AppConfig;
 import coilwright.web.Json;
 import coilwright.web.RecordBinder;
@@ -50,9 +50,9 @@ class SavedDesignRestartTest {
         return slugs;
     }
 
-    private static List<DemoDesign> demosOnceLoaded(App app, int expected) throws InterruptedException {
+    private static List<DemoEntry> demosOnceLoaded(App app, int expected) throws InterruptedException {
         long deadline = System.nanoTime() + 120_000_000_000L;
-        List<DemoDesign> demos = app.services().designs().demos();
+        List<DemoEntry> demos = app.services().designs().demos();
         while (demos.size() < expected && System.nanoTime() < deadline) {
             Thread.sleep(100);
             demos = app.services().designs().demos();
@@ -66,7 +66,7 @@ class SavedDesignRestartTest {
         App first = start();
         String designId;
         String revisionId;
-        List<DemoDesign> demosBefore;
+        List<DemoEntry> demosBefore;
         try {
             var saved = given().contentType("application/json").body(SavedFixtures.document("Kept across restarts"))
                     .post("/api/v1/designs");
@@ -76,11 +76,11 @@ class SavedDesignRestartTest {
         } finally {
             first.stop();
         }
-        assertEquals(expected, demosBefore.stream().map(DemoDesign::slug).toList());
+        assertEquals(expected, demosBefore.stream().map(DemoEntry::slug).toList());
         for (int restart = 0; restart < 2; restart++) {
             App again = start();
             try {
-                List<DemoDesign> demos = demosOnceLoaded(again, expected.size());
+                List<DemoEntry> demos = demosOnceLoaded(again, expected.size());
                 Thread.sleep(300);
                 assertEquals(demosBefore, again.services().designs().demos(), "demos unchanged, none duplicated");
                 assertEquals(demos, again.services().designs().demos());

@@ -9,11 +9,15 @@ import java.net.http.HttpResponse;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.time.Duration;
+import java.util.ArrayList;
 import java.util.List;
+import java.util.concurrent.TimeUnit;
 
 /** The real server ({@code coilwright.App}) as a separate JVM with the test classpath, on a free port. */
 final class ServerProcess implements AutoCloseable {
     static final HttpClient HTTP = HttpClient.newBuilder().connectTimeout(Duration.ofSeconds(5)).build();
+    /** Start-up options for short-lived servers: less JIT work and a small collector start them sooner. */
+    static final List<String> QUICK_START = List.of("-XX:TieredStopAtLevel=1", "-XX:+UseSerialGC", "-Xshare:auto");
     final Process process;
     final int port;
     final Path log;
@@ -25,19 +29,32 @@ final class ServerProcess implements AutoCloseable {
     }
 
     static ServerProcess start(Path dataDir, String... extra) throws IOException, InterruptedException {
+        return start(dataDir, List.of(), List.of(extra));
+    }
+
+    /** Starts the server with extra JVM options and server options, and waits until /health answers 200. */
+    static ServerProcess start(Path dataDir, List<String> jvmOptions, List<String> serverOptions)
+            throws IOException, InterruptedException {
+        ServerProcess server = launch(dataDir, jvmOptions, serverOptions);
+        server.awaitHealthy();
+        return server;
+    }
+
+    /** Starts the server without waiting for it (for tests of a failed start). */
+    static ServerProcess launch(Path dataDir, List<String> jvmOptions, List<String> serverOptions) throws IOException {
         int port;
         try (ServerSocket s = new ServerSocket(0)) {
             port = s.getLocalPort();
         }
         Path log = Files.createTempFile("coilwright-server", ".log");
-        List<String> cmd = new java.util.ArrayList<>(List.of(Path.of(System.getProperty("java.home"), "bin", "java").toString(),
-                "-Xmx256m", "-cp", System.getProperty("java.class.path"), "coilwright.App",
+        List<String> cmd = new ArrayList<>(List.of(Path.of(System.getProperty("java.home"), "bin", "java").toString(),
+                "-Xmx256m"));
+        cmd.addAll(jvmOptions);
+        cmd.addAll(List.of("-cp", System.getProperty("java.class.path"), "coilwright.App",
                 "--port", Integer.toString(port), "--data-dir", dataDir.toString()));
-        cmd.addAll(List.of(extra));
+        cmd.addAll(serverOptions);
         Process p = new ProcessBuilder(cmd).redirectErrorStream(true).redirectOutput(log.toFile()).start();
-        ServerProcess server = new ServerProcess(p, port, log);
-        server.awaitHealthy();
-        return server;
+        return new ServerProcess(p, port, log);
     }
 
     String url(String path) {
@@ -49,17 +66,28 @@ final class ServerProcess implements AutoCloseable {
                 HttpResponse.BodyHandlers.ofString());
     }
 
-    HttpResponse<String> postJson(String path, String body) throws IOException, InterruptedException {
-        return HTTP.send(HttpRequest.newBuilder(URI.create(url(path))).timeout(Duration.ofSeconds(60))
-                .header("Content-Type", "application/json").POST(HttpRequest.BodyPublishers.ofString(body)).build(),
-                HttpResponse.BodyHandlers.ofString());
+    HttpResponse<String> postJson(String path, String body, String... headers) throws IOException, InterruptedException {
+        HttpRequest.Builder request = HttpRequest.newBuilder(URI.create(url(path))).timeout(Duration.ofSeconds(60))
+                .header("Content-Type", "application/json").POST(HttpRequest.BodyPublishers.ofString(body));
+        if (headers.length > 0) {
+            request.headers(headers);
+        }
+        return HTTP.send(request.build(), HttpResponse.BodyHandlers.ofString());
+    }
+
+    String logText() {
+        try {
+            return Files.readString(log);
+        } catch (IOException e) {
+            return "(log unreadable: " + e + ")";
+        }
     }
 
     private void awaitHealthy() throws IOException, InterruptedException {
         long deadline = System.nanoTime() + Duration.ofSeconds(90).toNanos();
         while (System.nanoTime() < deadline) {
             if (!process.isAlive()) {
-                throw new IllegalStateException("server exited with " + process.exitValue() + ": " + Files.readString(log));
+                throw new IllegalStateException("server exited with " + process.exitValue() + ": " + logText());
             }
             try {
                 if (get("/health").statusCode() == 200) {
@@ -68,9 +96,9 @@ final class ServerProcess implements AutoCloseable {
             } catch (IOException notYet) {
                 // not listening yet
             }
-            Thread.sleep(100);
+            Thread.sleep(50);
         }
-        throw new IllegalStateException("server not healthy within 90 s: " + Files.readString(log));
+        throw new IllegalStateException("server not healthy within 90 s: " + logText());
     }
 
     /** SIGKILL on Linux: no shutdown hook runs. */
@@ -83,9 +111,14 @@ final class ServerProcess implements AutoCloseable {
     public void close() throws InterruptedException {
         if (process.isAlive()) {
             process.destroy();
-            if (!process.waitFor(30, java.util.concurrent.TimeUnit.SECONDS)) {
+            if (!process.waitFor(30, TimeUnit.SECONDS)) {
                 kill();
             }
+        }
+        try {
+            Files.deleteIfExists(log);
+        } catch (IOException ignored) {
+            // a temporary file; the operating system cleans up
         }
     }
 }
