@@ -133,10 +133,10 @@ class DesignPagesTest {
     @Test
     void a_length_out_of_range_is_named_in_the_apis_si_terms() {
         Map<String, String> f = defaultForm();
-        f.put("alternator.rotor.runningClearanceM", "0");
+        f.put("alternator.rotor.clearancePerSideM", "0");
         Html page = post(f, 400);
-        assertTrue(page.error("alternator.rotor.runningClearanceM").startsWith("alternator.rotor.runningClearanceM = 0.0"),
-                page.error("alternator.rotor.runningClearanceM"));
+        assertTrue(page.error("alternator.rotor.clearancePerSideM").startsWith("alternator.rotor.clearancePerSideM = 0.0"),
+                page.error("alternator.rotor.clearancePerSideM"));
     }
 
     @Test
