@@ -25,8 +25,6 @@ public final class WindingPage {
             "layers", "layers", "pitch", "coilPitchSlots", "paths", "parallelPaths", "skew", "skewSlotPitches");
     private static final Map<String, String> START = Map.of("slots", "12", "poles", "16", "phases", "3",
             "layers", "DOUBLE", "pitch", "0", "paths", "1", "skew", "0");
-    private static final List<Choice> LAYERS = List.of(new Choice("DOUBLE", "Two (double layer)"),
-            new Choice("SINGLE", "One (single layer)"));
     private final EvaluationService service;
     private final FormBinder forms = new FormBinder(new RecordBinder(Json.mapper()));
 
@@ -45,7 +43,7 @@ public final class WindingPage {
     }
 
     private static Map<String, Object> model(FormResult form) {
-        return new HashMap<>(Map.of("form", form, "layers", LAYERS, "phases", Choice.of("3", "1")));
+        return new HashMap<>(Map.of("form", form, "layers", Choice.LAYERS, "phases", Choice.of("3", "1")));
     }
 
     private static Map<String, List<String>> apiNames(Map<String, String> typed) {

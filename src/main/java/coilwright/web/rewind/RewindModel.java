@@ -27,7 +27,7 @@ final class RewindModel {
         model.put("form", form);
         model.put("statorForm", statorForm);
         model.put("poleLinks", new PoleLinks());
-        model.put("layers", Choice.of("DOUBLE", "SINGLE"));
+        model.put("layers", Choice.LAYERS);
         model.put("rankings", RANKINGS);
         model.put("connections", Choice.of("STAR", "DELTA"));
         model.put("gauges", Choice.of("AWG", "METRIC"));

@@ -93,8 +93,9 @@ class DesignPagesTest {
         assertEquals("a resistor bank takes current at any speed", page.id("cut-in").selectFirst(".note").text());
         assertEquals(3, page.all(".charts .chart svg").size());
         assertTrue(page.text().contains("EMF and terminal voltage"));
-        assertFalse(page.all(".winding-diagram").isEmpty(), "the winding diagram");
-        assertTrue(page.all("table.factors caption").get(0).text().contains("Winding factors by harmonic"));
+        assertFalse(page.all("figure.unrolled").isEmpty(), "the unrolled winding");
+        assertTrue(page.all(".factor-chart svg").text().contains("Winding factor by harmonic order"));
+        assertEquals("details", page.all("table.factors").get(0).closest("details").tagName(), "numbers behind a disclosure");
     }
 
     @Test
