@@ -36,7 +36,7 @@ import java.util.concurrent.TimeUnit;
 @Fork(1)
 public class ExampleEvaluationBenchmark {
 
-    @Param({"axial-wind-24v", "radial-hydro-48v", "rewound-motor-12v"})
+    @Param({"axial-wind-48v", "radial-hydro-48v", "rewound-motor-12v"})
     public String example;
 
     private EvaluationRequest request;

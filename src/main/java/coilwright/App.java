@@ -11,6 +11,7 @@ import coilwright.web.HealthHandler;
 import coilwright.web.JacksonJsonMapper;
 import coilwright.web.Json;
 import coilwright.web.Metrics;
+import coilwright.web.OldNamesNotice;
 import coilwright.web.OpenApiHandler;
 import coilwright.web.RecordBinder;
 import coilwright.web.Route;
@@ -86,6 +87,7 @@ public final class App {
             });
             cfg.requestLogger.http(metrics::record);
             cfg.routes.before(Units::remember);
+            cfg.routes.before("/api/*", OldNamesNotice::mark);
             ErrorMapping.register(cfg.routes);
             routes.forEach(r -> cfg.routes.addHttpHandler(r.method(), r.path(), r.handler()));
             cfg.events.serverStarted(() -> started.set(true));

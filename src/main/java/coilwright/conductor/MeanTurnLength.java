@@ -27,25 +27,25 @@ public final class MeanTurnLength {
     }
 
     /**
-     * A flat coil of an axial-flux air-cored stator wound around a trapezoidal hole (a rectangle when the
-     * two widths are equal). The hole has parallel inner and outer edges {@code holeInnerWidthM} and
-     * {@code holeOuterWidthM} a radial distance {@code radialLegLengthM} apart. The mean turn is the curve
-     * at half the leg width outside the hole: for a convex outline the curve offset by a distance t has the
-     * perimeter P + 2*pi*t with rounded corners, so MLT = P_hole + pi*legWidth (exact geometry).
+     * A flat coil of an axial-flux air-cored stator: a band of conductors wound round a trapezoidal inner opening
+     * (a rectangle without taper). The opening is {@code openingMidWidthM} wide halfway along its radial length L and
+     * {@code openingTaperM} wider at its outer end than at its inner end, so its perimeter is
+     * P = 2 * mid width + 2 * sqrt(L^2 + (taper/2)^2). The mean turn is the curve at half the band width outside the
+     * opening: for a convex outline the curve offset by a distance d has the perimeter P + 2*pi*d with rounded
+     * corners, so MLT = P + pi * band width (exact geometry).
      *
-     * @param radialLegLengthM radial length of the hole, which is the straight (active) length of each leg, m, &gt; 0
-     * @param holeInnerWidthM  hole width at the inner radius, m, &gt;= 0
-     * @param holeOuterWidthM  hole width at the outer radius, m, &gt;= 0
-     * @param legWidthM        width of the wound bundle in the coil's plane (radial build), m, &gt; 0
+     * @param radialLengthM    radial length of the opening (the active length of each side), m, &gt; 0
+     * @param openingMidWidthM opening width halfway along, m, &gt;= 0
+     * @param openingTaperM    outer end width minus inner end width, m, &gt;= 0
+     * @param bandWidthM       width of the conductor band in the coil's plane, m, &gt; 0
      * @return mean turn length, m
      */
-    public static double axialCoil(double radialLegLengthM, double holeInnerWidthM, double holeOuterWidthM,
-                                   double legWidthM) {
-        new Checks().positive("radialLegLengthM", radialLegLengthM).nonNegative("holeInnerWidthM", holeInnerWidthM)
-                .nonNegative("holeOuterWidthM", holeOuterWidthM).positive("legWidthM", legWidthM).throwIfAny();
-        double slant = Math.hypot(radialLegLengthM, (holeOuterWidthM - holeInnerWidthM) / 2.0);
-        double holePerimeterM = holeInnerWidthM + holeOuterWidthM + 2.0 * slant;
-        return holePerimeterM + Math.PI * legWidthM;
+    public static double axialCoilAroundOpening(double radialLengthM, double openingMidWidthM, double openingTaperM,
+                                                double bandWidthM) {
+        new Checks().positive("radialLengthM", radialLengthM).nonNegative("openingMidWidthM", openingMidWidthM)
+                .nonNegative("openingTaperM", openingTaperM).positive("bandWidthM", bandWidthM).throwIfAny();
+        double slant = Math.hypot(radialLengthM, openingTaperM / 2.0);
+        return 2.0 * openingMidWidthM + 2.0 * slant + Math.PI * bandWidthM;
     }
 
     /**

@@ -82,7 +82,7 @@ public final class ConductorEddyLoss {
         double rho = Copper.resistivityOhmM(windingTempC);
         double omega = poles / 2.0 * speedRpm * Math.PI / 30.0;
         double halfGap = rotor.magneticGapM() / 2;
-        double h = rotor.statorThicknessM();
+        double h = rotor.coilLayerThicknessM();
         double conductors = 2.0 * coils * turnsPerCoil * strandsInHand;
         UnivariateFunction meanSquare = r -> {
             double tau = 2 * Math.PI * r / poles;

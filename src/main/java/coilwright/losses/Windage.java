@@ -110,7 +110,7 @@ public final class Windage {
                                                 double densityKgM3, double kinematicViscosityM2s) {
         double w = omega(speedRpm);
         return 2 * (0.5 * freeDiscTorqueNm(discRadiusM, w, densityKgM3, kinematicViscosityM2s)
-                + 0.5 * enclosedDiscTorqueNm(discRadiusM, rotor.runningClearanceM(), w, densityKgM3,
+                + 0.5 * enclosedDiscTorqueNm(discRadiusM, rotor.clearancePerSideM(), w, densityKgM3,
                 kinematicViscosityM2s));
     }
 

@@ -19,7 +19,7 @@ import coilwright.winding.Winding;
  *
  * @param meanTurnLengthM mean length of one turn, m
  * @param window          area available to one coil side
- * @param legWidthM       width of one coil leg (air-cored) or slot width (slotted), m
+ * @param legWidthM       width of one coil's conductor band (air-cored) or slot width (slotted), m
  */
 record CoilGeometry(double meanTurnLengthM, CoilWindow window, double legWidthM) {
 
@@ -57,21 +57,22 @@ record CoilGeometry(double meanTurnLengthM, CoilWindow window, double legWidthM)
 
     static CoilGeometry airCored(AxialDualRotor rotor, AirCoredStator stator, Winding winding) {
         int coils = winding.coils().size();
-        double legM = stator.coilLegWidthM();
-        // coils sit side by side round the stator ring; each takes its hole plus two legs of width
-        checkRing(coils, stator.coilHoleInnerWidthM() + 2 * legM, rotor.innerRadiusM(), "inner");
-        checkRing(coils, stator.coilHoleOuterWidthM() + 2 * legM, rotor.outerRadiusM(), "outer");
-        double mltM = MeanTurnLength.axialCoil(rotor.magnetLengthM(), stator.coilHoleInnerWidthM(),
-                stator.coilHoleOuterWidthM(), legM);
-        return new CoilGeometry(mltM, CoilWindow.airCored(legM, rotor.statorThicknessM()), legM);
+        double bandM = stator.conductorBandWidthM();
+        // coils sit side by side round the stator ring; each takes its opening plus a band on either side
+        checkRing(coils, stator.openingInnerEndWidthM() + 2 * bandM, rotor.innerRadiusM(), "inner");
+        checkRing(coils, stator.openingOuterEndWidthM() + 2 * bandM, rotor.outerRadiusM(), "outer");
+        double mltM = MeanTurnLength.axialCoilAroundOpening(rotor.magnetLengthM(), stator.openingMidWidthM(),
+                stator.openingTaperM(), bandM);
+        return new CoilGeometry(mltM, CoilWindow.airCored(bandM, rotor.coilLayerThicknessM()), bandM);
     }
 
     private static void checkRing(int coils, double coilWidthM, double radiusM, String edge) {
         double availableM = 2 * Math.PI * radiusM;
         if (coils * coilWidthM > availableM) {
-            throw new InfeasibleDesignException("stator.coilLegWidthM", String.format(java.util.Locale.ROOT,
-                    "stator.coilLegWidthM: %d coils each %.4f m wide (hole + 2 legs) need %.4f m at the magnets' %s "
-                            + "radius %.4f m, but the circumference there is only %.4f m; make the legs or holes narrower",
+            throw new InfeasibleDesignException("stator.conductorBandWidthM", String.format(java.util.Locale.ROOT,
+                    "stator.conductorBandWidthM: %d coils each %.4f m wide (opening + 2 conductor bands) need %.4f m at"
+                            + " the magnets' %s radius %.4f m, but the circumference there is only %.4f m; make the"
+                            + " bands or the openings narrower",
                     coils, coilWidthM, coils * coilWidthM, edge, radiusM, availableM));
         }
     }
@@ -91,6 +92,6 @@ record CoilGeometry(double meanTurnLengthM, CoilWindow window, double legWidthM)
     static InductanceEstimate estimateAirCored(AxialDualRotor rotor, AirCoredStator stator, Winding winding,
                                                int turnsPerCoil, double mltM) {
         return InductanceEstimate.airCored(new AirCoredInductanceInput(turnsPerCoil, winding.coilsPerPhase(),
-                winding.spec().parallelPaths(), mltM, stator.coilLegWidthM(), rotor.statorThicknessM()));
+                winding.spec().parallelPaths(), mltM, stator.conductorBandWidthM(), rotor.coilLayerThicknessM()));
     }
 }

@@ -14,11 +14,11 @@ import java.util.Locale;
  * @param magnetLengthM        radial magnet length, 0.002 to 0.5 m
  * @param magnetCentreRadiusM  radius of the magnet centres (pitch circle), 0.01 to 3 m
  * @param magnetThicknessM     axial thickness of each magnet, 0.0005 to 0.1 m
- * @param statorThicknessM     axial thickness of the air-cored coil layer, 0.001 to 0.1 m
- * @param runningClearanceM    clearance between magnet face and stator on each side, 0.0001 to 0.02 m
+ * @param coilLayerThicknessM  axial thickness of the air-cored coil layer between the discs, 0.001 to 0.1 m
+ * @param clearancePerSideM    clearance between a magnet face and the coil layer, on each side, 0.0001 to 0.02 m
  */
 public record AxialDualRotor(String gradeName, double magnetWidthM, double magnetLengthM, double magnetCentreRadiusM,
-                             double magnetThicknessM, double statorThicknessM, double runningClearanceM)
+                             double magnetThicknessM, double coilLayerThicknessM, double clearancePerSideM)
         implements RotorSpec {
 
     public AxialDualRotor {
@@ -28,8 +28,8 @@ public record AxialDualRotor(String gradeName, double magnetWidthM, double magne
         c.range("magnetLengthM", magnetLengthM, 0.002, 0.5);
         c.range("magnetCentreRadiusM", magnetCentreRadiusM, 0.01, 3.0);
         c.range("magnetThicknessM", magnetThicknessM, 0.0005, 0.1);
-        c.range("statorThicknessM", statorThicknessM, 0.001, 0.1);
-        c.range("runningClearanceM", runningClearanceM, 0.0001, 0.02);
+        c.range("coilLayerThicknessM", coilLayerThicknessM, 0.001, 0.1);
+        c.range("clearancePerSideM", clearancePerSideM, 0.0001, 0.02);
         c.throwIfAny();
         double innerM = magnetCentreRadiusM - magnetLengthM / 2.0;
         if (innerM <= 0.0) {
@@ -40,9 +40,9 @@ public record AxialDualRotor(String gradeName, double magnetWidthM, double magne
         }
     }
 
-    /** Total magnetic gap between the two magnet faces: stator thickness + 2 * running clearance, metres. */
+    /** Total magnetic gap between the two magnet faces: coil layer thickness + 2 * clearance per side, metres. */
     public double magneticGapM() {
-        return statorThicknessM + 2.0 * runningClearanceM;
+        return coilLayerThicknessM + 2.0 * clearancePerSideM;
     }
 
     /** Radius of the magnets' inner edge, metres. */
@@ -93,13 +93,13 @@ public record AxialDualRotor(String gradeName, double magnetWidthM, double magne
 
     /** A copy with another magnet thickness. */
     public AxialDualRotor withMagnetThicknessM(double m) {
-        return new AxialDualRotor(gradeName, magnetWidthM, magnetLengthM, magnetCentreRadiusM, m, statorThicknessM,
-                runningClearanceM);
+        return new AxialDualRotor(gradeName, magnetWidthM, magnetLengthM, magnetCentreRadiusM, m, coilLayerThicknessM,
+                clearancePerSideM);
     }
 
-    /** A copy with another running clearance. */
-    public AxialDualRotor withRunningClearanceM(double m) {
+    /** A copy with another clearance per side. */
+    public AxialDualRotor withClearancePerSideM(double m) {
         return new AxialDualRotor(gradeName, magnetWidthM, magnetLengthM, magnetCentreRadiusM, magnetThicknessM,
-                statorThicknessM, m);
+                coilLayerThicknessM, m);
     }
 }

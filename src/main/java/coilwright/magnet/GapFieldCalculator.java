@@ -103,7 +103,7 @@ public final class GapFieldCalculator {
         double lm = a.magnetThicknessM();
         double gapM = a.magneticGapM();
         double halfGapM = gapM / 2.0;
-        double halfLayerM = a.statorThicknessM() / 2.0;
+        double halfLayerM = a.coilLayerThicknessM() / 2.0;
         double bg1dT = brT * 2.0 * lm / (2.0 * lm + mu * gapM);
         double tauCM = AxialDualRotor.polePitchAtM(a.magnetCentreRadiusM(), poles);
         double alphaC = a.magnetWidthM() / tauCM;
@@ -129,7 +129,7 @@ public final class GapFieldCalculator {
                     + "each pole pitch carries no magnet, so the EMF is small and rich in harmonics", alphaC));
         }
         return new GapField(brT, tauCM, alphaC, 1.0, gapM, bg1dT, b11dT, b1T, reported(bv),
-                peak(bv, tauCM, a.runningClearanceM()),
+                peak(bv, tauCM, a.clearancePerSideM()),
                 integrate(flux1d, a), integrate(flux2d, a), b1T / b11dT,
                 volumeM3, volumeM3 * grade.material().densityKgPerM3(),
                 "normal flux density averaged over the coil layer thickness, at the magnet centre radius; "

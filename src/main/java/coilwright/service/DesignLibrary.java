@@ -137,10 +137,15 @@ public final class DesignLibrary {
         return new DesignDocument(DesignDocument.SCHEMA_VERSION, r.title(), r.notes(), request(r));
     }
 
-    /** Parses stored JSON (input or snapshot) into a tree. */
+    /**
+     * Parses stored JSON (input or snapshot) into a tree, under the current input names: a revision saved under
+     * names replaced since ({@link OldFieldNames}) reads, compares and recomputes like any other.
+     */
     public JsonNode tree(String json) {
         try {
-            return mapper.readTree(json);
+            JsonNode tree = mapper.readTree(json);
+            OldFieldNames.upgradeTree(tree);
+            return tree;
         } catch (JsonProcessingException e) {
             throw new IllegalStateException("stored JSON does not parse: " + e.getOriginalMessage(), e);
         }

@@ -26,9 +26,9 @@ public final class RewindService {
         return cache.get(request, r -> RequestPaths.under("machine", () -> RewindPlanner.plan(r.machine(), r.target())));
     }
 
-    /** Balanced pole counts in the request's range, best winding factor first (the list may be empty). */
+    /** Balanced pole counts in the request's range, in the order asked for (the list may be empty). */
     public StatorOptionsResult statorOptions(StatorOptionsRequest request) {
         return cache.get(request, r -> StatorOptionsResult.of(r,
-                StatorOptions.forSlots(r.slots(), r.phases(), r.layers(), r.minPoles(), r.maxPoles())));
+                StatorOptions.forSlots(r.slots(), r.phases(), r.layers(), r.minPoles(), r.maxPoles(), r.ranking())));
     }
 }

@@ -1,6 +1,7 @@
 package coilwright.service;
 
 import coilwright.rewind.PoleOption;
+import coilwright.rewind.PoleRanking;
 import coilwright.winding.Layers;
 import java.util.List;
 
@@ -12,15 +13,17 @@ import java.util.List;
  * @param layers   SINGLE or DOUBLE
  * @param minPoles lowest pole count considered
  * @param maxPoles highest pole count considered
- * @param options  balanced pole counts, highest fundamental winding factor first (empty when none balances)
+ * @param rankBy   the order of the options
+ * @param options  balanced pole counts in that order (empty when none balances)
  */
 public record StatorOptionsResult(int slots, int phases, Layers layers, int minPoles, int maxPoles,
-                                  List<PoleOption> options) {
+                                  PoleRanking rankBy, List<PoleOption> options) {
     public StatorOptionsResult {
         options = List.copyOf(options);
     }
 
     public static StatorOptionsResult of(StatorOptionsRequest r, List<PoleOption> options) {
-        return new StatorOptionsResult(r.slots(), r.phases(), r.layers(), r.minPoles(), r.maxPoles(), options);
+        return new StatorOptionsResult(r.slots(), r.phases(), r.layers(), r.minPoles(), r.maxPoles(), r.ranking(),
+                options);
     }
 }

@@ -29,13 +29,13 @@ final class AxialDrafts {
             coilCounts += Math.max(0, (maxCoils(poles) - minCoils(poles)) / 3 + 1);
         }
         long magnetChoices = b.magnets().stream().mapToLong(m -> m.countsPerPole().size()).sum();
-        return b.discDiametersM().size() * (long) b.statorThicknessesM().size() * magnetChoices * coilCounts;
+        return b.discDiametersM().size() * (long) b.coilLayerThicknessesM().size() * magnetChoices * coilCounts;
     }
 
     static void draft(AxialBuild b, WindingCheck windings, Consumer<LayoutDraft> out,
                       EnumMap<LayoutRejection, Long> rejected) {
         for (double disc : b.discDiametersM()) {
-            for (double stator : b.statorThicknessesM()) {
+            for (double stator : b.coilLayerThicknessesM()) {
                 for (MagnetOption m : b.magnets()) {
                     for (int count : m.countsPerPole()) {
                         for (int poles = b.minPoles(); poles <= b.maxPoles(); poles += 2) {
@@ -82,7 +82,7 @@ final class AxialDrafts {
         double centreM = discM / 2 - b.rimMarginM() - lengthM / 2;
         try {
             AxialDualRotor r = new AxialDualRotor(m.gradeName(), m.widthM(), lengthM, centreM, m.thicknessM(), statorM,
-                    b.runningClearanceM());
+                    b.clearancePerSideM());
             r.checkFits(poles);
             return Optional.of(r);
         } catch (InvalidInputException | InfeasibleDesignException e) {
@@ -106,7 +106,7 @@ final class AxialDrafts {
         double holeInnerM = roomInnerM - 2 * legM;
         double holeOuterM = (2 * Math.PI * r.outerRadiusM() / coils - gapM) * (1 - 1e-9) - 2 * legM;
         try {
-            return Optional.of(new AirCoredStator(legM, holeInnerM, holeOuterM));
+            return Optional.of(AirCoredStator.ofOpeningEnds(legM, holeInnerM, holeOuterM));
         } catch (InvalidInputException e) {
             return Optional.empty();
         }

@@ -26,15 +26,15 @@ import coilwright.validation.Checks;
  * @param magnetOuterRadiusM  outer edge of the magnets, m
  * @param coilRingInnerRadiusM inner edge of the coils, m (&lt;= magnetInnerRadiusM)
  * @param coilRingOuterRadiusM outer edge of the coils, m (&gt;= magnetOuterRadiusM)
- * @param statorThicknessM    thickness of the coil layer, m, 0.001 to 0.1
- * @param runningClearanceM   clearance between stator and magnets on each side, m, 0.0001 to 0.02
+ * @param coilLayerThicknessM    thickness of the coil layer, m, 0.001 to 0.1
+ * @param clearancePerSideM   clearance between stator and magnets on each side, m, 0.0001 to 0.02
  * @param rotorDiscRadiusM    outer radius of the steel discs, m (&gt;= magnetOuterRadiusM)
  * @param copperFill          copper share of the coil ring's volume, 0.05 to 0.8
  * @param resinConductivityWPerMK conductivity of the casting resin, W/(m K), 0.05 to 5
  * @param emissivity          emissivity of resin and disc surfaces, 0 to 1
  */
 public record DiscStatorThermal(double magnetInnerRadiusM, double magnetOuterRadiusM, double coilRingInnerRadiusM,
-                                double coilRingOuterRadiusM, double statorThicknessM, double runningClearanceM,
+                                double coilRingOuterRadiusM, double coilLayerThicknessM, double clearancePerSideM,
                                 double rotorDiscRadiusM, double copperFill, double resinConductivityWPerMK,
                                 double emissivity) implements ThermalModel {
     /** How far the steel discs reach beyond the magnets when not given, m (common practice). */
@@ -49,8 +49,8 @@ public record DiscStatorThermal(double magnetInnerRadiusM, double magnetOuterRad
         c.range("magnetOuterRadiusM", magnetOuterRadiusM, 0.002, 3);
         c.range("coilRingInnerRadiusM", coilRingInnerRadiusM, 0.0, 3);
         c.range("coilRingOuterRadiusM", coilRingOuterRadiusM, 0.002, 3.5);
-        c.range("statorThicknessM", statorThicknessM, 0.001, 0.1);
-        c.range("runningClearanceM", runningClearanceM, 0.0001, 0.02);
+        c.range("coilLayerThicknessM", coilLayerThicknessM, 0.001, 0.1);
+        c.range("clearancePerSideM", clearancePerSideM, 0.0001, 0.02);
         c.range("rotorDiscRadiusM", rotorDiscRadiusM, 0.002, 3.5);
         c.range("copperFill", copperFill, 0.05, 0.8);
         c.range("resinConductivityWPerMK", resinConductivityWPerMK, 0.05, 5);
@@ -76,17 +76,17 @@ public record DiscStatorThermal(double magnetInnerRadiusM, double magnetOuterRad
      * @param copperFill copper volume of all coils / volume of the coil ring, 0.05 to 0.8
      */
     public static DiscStatorThermal of(AxialDualRotor rotor, AirCoredStator stator, double copperFill) {
-        double leg = stator.coilLegWidthM();
+        double leg = stator.conductorBandWidthM();
         return new DiscStatorThermal(rotor.innerRadiusM(), rotor.outerRadiusM(),
-                Math.max(0.0, rotor.innerRadiusM() - leg), rotor.outerRadiusM() + leg, rotor.statorThicknessM(),
-                rotor.runningClearanceM(), rotor.outerRadiusM() + DEFAULT_DISC_OVERHANG_M, copperFill,
+                Math.max(0.0, rotor.innerRadiusM() - leg), rotor.outerRadiusM() + leg, rotor.coilLayerThicknessM(),
+                rotor.clearancePerSideM(), rotor.outerRadiusM() + DEFAULT_DISC_OVERHANG_M, copperFill,
                 ThermalMaterials.CASTING_RESIN, ThermalMaterials.PAINTED_EMISSIVITY);
     }
 
     /** A copy with another resin conductivity (e.g. {@link ThermalMaterials#FILLED_CASTING_RESIN}). */
     public DiscStatorThermal withResinConductivityWPerMK(double k) {
         return new DiscStatorThermal(magnetInnerRadiusM, magnetOuterRadiusM, coilRingInnerRadiusM,
-                coilRingOuterRadiusM, statorThicknessM, runningClearanceM, rotorDiscRadiusM, copperFill, k, emissivity);
+                coilRingOuterRadiusM, coilLayerThicknessM, clearancePerSideM, rotorDiscRadiusM, copperFill, k, emissivity);
     }
 
     /** Stator area under the magnets (one face), m^2. */
@@ -102,7 +102,7 @@ public record DiscStatorThermal(double magnetInnerRadiusM, double magnetOuterRad
     @Override
     public ThermalSolution solve(CoolingConditions cc, HeatSources heat) {
         double kEq = ThermalMaterials.acrossWiresWPerMK(resinConductivityWPerMK, copperFill);
-        double gActive = 12 * kEq * activeAreaM2() / statorThicknessM;
+        double gActive = 12 * kEq * activeAreaM2() / coilLayerThicknessM;
         double[] q = {heat.windingW() + heat.statorIronW(), 0, heat.rotorW() + heat.bearingW()};
         NetworkIteration.Result r = NetworkIteration.solve(3, t -> network(cc, t, kEq, gActive), q, cc.ambientC());
         double[] t = r.temperaturesC();
@@ -126,13 +126,13 @@ public record DiscStatorThermal(double magnetInnerRadiusM, double magnetOuterRad
             double hForced = Convection.rotatingDiscH(rotorDiscRadiusM, w, film(surfaceC, amb));
             double hNatural = Convection.naturalVerticalPlateH(2 * coilRingOuterRadiusM, surfaceC, amb);
             double h = Convection.combined(hForced, hNatural) + Convection.radiationH(emissivity, surfaceC, amb);
-            double surface = 2 * exposed + 2 * Math.PI * (coilRingOuterRadiusM + coilRingInnerRadiusM) * statorThicknessM;
-            double gCond = 12 * kEq * exposed / statorThicknessM;
+            double surface = 2 * exposed + 2 * Math.PI * (coilRingOuterRadiusM + coilRingInnerRadiusM) * coilLayerThicknessM;
+            double gCond = 12 * kEq * exposed / coilLayerThicknessM;
             net.toAmbient(wn, series(gCond, h * surface));
         }
         // running clearance: conduction across it or rotor-driven convection on both surfaces in series
         double filmGap = (t[fn] + t[rn]) / 2;
-        double hGap = Math.max(Air.conductivityWPerMK(Air.clampC(filmGap)) / runningClearanceM,
+        double hGap = Math.max(Air.conductivityWPerMK(Air.clampC(filmGap)) / clearancePerSideM,
                 Convection.rotatingDiscH(magnetOuterRadiusM, w, filmGap) / 2);
         net.link(fn, rn, hGap * 2 * activeAreaM2());
         // outer faces of both discs

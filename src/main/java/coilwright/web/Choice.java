@@ -11,6 +11,10 @@ import java.util.Map;
  * @param label what the user reads
  */
 public record Choice(String value, String label) {
+    /** The coil sides per slot in words (the values are the {@code Layers} names). */
+    public static final List<Choice> LAYERS = List.of(new Choice("DOUBLE", "Two (double layer)"),
+            new Choice("SINGLE", "One (single layer)"));
+
     /** Options whose label is their value, e.g. enum names. */
     public static List<Choice> of(List<String> values) {
         return values.stream().map(v -> new Choice(v, v)).toList();

@@ -17,6 +17,15 @@ import com.fasterxml.jackson.databind.module.SimpleModule;
 import com.fasterxml.jackson.databind.type.LogicalType;
 import com.fasterxml.jackson.databind.ser.std.StdSerializer;
 import com.fasterxml.jackson.datatype.jdk8.Jdk8Module;
+import coilwright.service.OldFieldNames;
+import com.fasterxml.jackson.databind.BeanDescription;
+import com.fasterxml.jackson.databind.DeserializationConfig;
+import com.fasterxml.jackson.databind.DeserializationContext;
+import com.fasterxml.jackson.databind.JsonDeserializer;
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.deser.BeanDeserializerModifier;
+import com.fasterxml.jackson.databind.deser.std.DelegatingDeserializer;
+import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.io.IOException;
 
 /**
@@ -55,6 +64,7 @@ public final class Json {
         finiteOnly.addSerializer(org.apache.commons.math3.fraction.Fraction.class, new FractionSerializer());
         finiteOnly.addDeserializer(Double.class, new FiniteDoubleDeserializer(false));
         finiteOnly.addDeserializer(Double.TYPE, new FiniteDoubleDeserializer(true));
+        finiteOnly.setDeserializerModifier(new OldNamesFirst());
         JsonMapper.Builder builder = JsonMapper.builder();
         for (Class<?> sealed : SEALED_TYPES) {
             builder.addMixIn(sealed, TypedVariant.class);
@@ -77,6 +87,45 @@ public final class Json {
                 .withCoercionConfig(LogicalType.Float, c -> c.setCoercion(CoercionInputShape.String, CoercionAction.Fail))
                 .withCoercionConfig(LogicalType.Integer, c -> c.setCoercion(CoercionInputShape.String, CoercionAction.Fail))
                 .build();
+    }
+
+    /**
+     * Lets stored designs written under replaced input names bind for ever ({@link OldFieldNames}): the object of a
+     * renamed record is read as a tree, rewritten to the current names, then bound as usual.
+     */
+    private static final class OldNamesFirst extends BeanDeserializerModifier {
+        @Override
+        public JsonDeserializer<?> modifyDeserializer(DeserializationConfig config, BeanDescription description,
+                                                      JsonDeserializer<?> deserializer) {
+            Class<?> type = description.getBeanClass();
+            return OldFieldNames.renamed(type) ? new Rewriting(deserializer, type) : deserializer;
+        }
+    }
+
+    private static final class Rewriting extends DelegatingDeserializer {
+        private final Class<?> type;
+
+        Rewriting(JsonDeserializer<?> delegate, Class<?> type) {
+            super(delegate);
+            this.type = type;
+        }
+
+        @Override
+        protected JsonDeserializer<?> newDelegatingInstance(JsonDeserializer<?> delegate) {
+            return new Rewriting(delegate, type);
+        }
+
+        @Override
+        public Object deserialize(JsonParser p, DeserializationContext ctxt) throws IOException {
+            JsonNode tree = ctxt.readTree(p);
+            if (tree instanceof ObjectNode object) {
+                OldFieldNames.upgrade(type, object);
+            }
+            try (JsonParser rewritten = tree.traverse(p.getCodec())) {
+                rewritten.nextToken();
+                return _delegatee.deserialize(rewritten, ctxt);
+            }
+        }
     }
 
     /** Writes a fraction such as slots per pole per phase as text, {@code "2/5"}. */

@@ -2,6 +2,8 @@ package coilwright.web;
 
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
+import com.fasterxml.jackson.databind.node.ObjectNode;
+import coilwright.service.OldFieldNames;
 import coilwright.validation.FieldError;
 import coilwright.validation.InfeasibleDesignException;
 import coilwright.validation.InvalidInputException;
@@ -58,6 +60,12 @@ public final class RecordBinder {
     }
 
     Object bindRecord(JsonNode node, Class<?> type, String path, List<FieldError> errors) {
+        if (OldFieldNames.renamed(type) && node instanceof ObjectNode object) {
+            // designs saved under replaced names must bind for ever: rewrite a copy to the current names first
+            ObjectNode current = object.deepCopy();
+            OldFieldNames.upgrade(type, current);
+            node = current;
+        }
         RecordComponent[] components = type.getRecordComponents();
         Set<String> names = new LinkedHashSet<>();
         Arrays.stream(components).forEach(c -> names.add(c.getName()));

@@ -121,9 +121,9 @@ class AlternatorModelTest {
     void refuses_coils_that_do_not_fit_round_the_stator_ring() {
         AlternatorSpec s = SampleDesigns.axial24V();
         AlternatorSpec fat = new AlternatorSpec(s.winding(), s.turnsPerCoil(), s.connection(), s.rotor(),
-                new AirCoredStator(0.030, 0.030, 0.040), s.wire(), s.cooling(), s.insulationClass(), 60, 40, 0, 0);
+                new AirCoredStator(0.030, 0.035, 0.010), s.wire(), s.cooling(), s.insulationClass(), 60, 40, 0, 0);
         InfeasibleDesignException e = assertThrows(InfeasibleDesignException.class, () -> AlternatorModel.build(fat));
-        assertEquals("stator.coilLegWidthM", e.field());
+        assertEquals("stator.conductorBandWidthM", e.field());
         assertTrue(e.getMessage().contains("12 coils"), e.getMessage());
     }
 

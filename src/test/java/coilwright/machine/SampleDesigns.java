@@ -20,7 +20,7 @@ public final class SampleDesigns {
                 new WindingSpec(12, 16, 3, Layers.DOUBLE, 0, 1, 0),
                 36, Connection.STAR,
                 new AxialDualRotor("N42", 0.040, 0.050, 0.150, 0.010, 0.013, 0.0015),
-                new AirCoredStator(0.016, 0.030, 0.040),
+                new AirCoredStator(0.016, 0.035, 0.010),
                 new WireSpec(coilwright.conductor.WireGauge.AWG, 14, 0, 2, 1),
                 Cooling.AIR_COOLED_AXIAL_OPEN_COIL, ThermalClass.H, 60, 40, 0, 0);
     }

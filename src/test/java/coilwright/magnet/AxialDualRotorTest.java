@@ -68,7 +68,7 @@ class AxialDualRotorTest {
         assertTrue(m.contains("magnetLengthM = 1.0: must be between 0.002 and 0.5"), m);
         assertTrue(m.contains("magnetCentreRadiusM = Infinity: must be a finite number"), m);
         assertTrue(m.contains("magnetThicknessM = 0.2: must be between 5.0E-4 and 0.1"), m);
-        assertTrue(m.contains("statorThicknessM = 5.0E-4: must be between 0.001 and 0.1"), m);
-        assertTrue(m.contains("runningClearanceM = 0.05: must be between 1.0E-4 and 0.02"), m);
+        assertTrue(m.contains("coilLayerThicknessM = 5.0E-4: must be between 0.001 and 0.1"), m);
+        assertTrue(m.contains("clearancePerSideM = 0.05: must be between 1.0E-4 and 0.02"), m);
     }
 }

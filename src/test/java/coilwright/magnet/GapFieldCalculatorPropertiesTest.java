@@ -116,7 +116,7 @@ class GapFieldCalculatorPropertiesTest {
         }
         GapField base = GapFieldCalculator.solve(a, poles, 0, 20);
         GapField thicker = GapFieldCalculator.solve(a.withMagnetThicknessM(a.magnetThicknessM() * 1.2), poles, 0, 20);
-        GapField looser = GapFieldCalculator.solve(a.withRunningClearanceM(a.runningClearanceM() * 1.2), poles, 0, 20);
+        GapField looser = GapFieldCalculator.solve(a.withClearancePerSideM(a.clearancePerSideM() * 1.2), poles, 0, 20);
         assertTrue(thicker.fluxPerPoleWb() > base.fluxPerPoleWb(), "thicker magnets");
         assertTrue(looser.fluxPerPoleWb() < base.fluxPerPoleWb(), "more clearance");
     }

@@ -82,7 +82,7 @@ class GapFieldCalculatorTest {
             double alpha = Math.min(1, a.magnetWidthM() / tau);
             sum1d += 2 / Math.PI * HarmonicGapField.squareWaveFundamentalT(f.gapFluxDensity1dT(), alpha) * tau * dr;
             sum2d += 2 / Math.PI * HarmonicGapField.normalFluxDensityT(1, f.remanenceAtTempT(), 1.05, alpha, tau,
-                    a.magnetThicknessM(), gapHalf, a.statorThicknessM() / 2) * tau * dr;
+                    a.magnetThicknessM(), gapHalf, a.coilLayerThicknessM() / 2) * tau * dr;
         }
         assertEquals(sum1d, f.fluxPerPole1dWb(), 1e-7 * sum1d);
         assertEquals(sum2d, f.fluxPerPoleWb(), 1e-7 * sum2d);

@@ -46,12 +46,12 @@ class DesignLibraryTest {
 
     @Test
     void the_examples_are_found_on_the_classpath() {
-        assertEquals(List.of("axial-wind-24v", "radial-hydro-48v", "rewound-motor-12v"), List.copyOf(EXAMPLES.keySet()));
+        assertEquals(List.of("axial-wind-48v", "radial-hydro-48v", "rewound-motor-12v"), List.copyOf(EXAMPLES.keySet()));
     }
 
     @Test
     void saving_stores_canonical_input_the_results_snapshot_and_the_tool_version() throws Exception {
-        DesignDocument doc = example("axial-wind-24v");
+        DesignDocument doc = example("axial-wind-48v");
         SaveReceipt o = library.save(doc);
         SavedRevision r = library.revision(o.revisionId());
         assertEquals(Json.mapper().writeValueAsString(doc.design()), r.inputJson());
@@ -108,7 +108,7 @@ class DesignLibraryTest {
 
     @Test
     void a_recomputation_with_the_same_tool_reproduces_every_saved_number() {
-        SavedRevision r = library.revision(library.save(example("axial-wind-24v")).revisionId());
+        SavedRevision r = library.revision(library.save(example("axial-wind-48v")).revisionId());
         Recomputation again = library.recompute(r);
         assertFalse(again.differs(), () -> again.changes().toString());
         assertFalse(again.toolVersionDiffers());
@@ -117,7 +117,7 @@ class DesignLibraryTest {
 
     @Test
     void a_snapshot_from_another_version_with_other_numbers_is_reported_with_each_changed_number() throws Exception {
-        DesignDocument doc = example("axial-wind-24v");
+        DesignDocument doc = example("axial-wind-48v");
         ObjectNode results = Json.mapper().valueToTree(evaluation.evaluate(doc.design()));
         double cutIn = results.get("cutInSpeedRpm").doubleValue();
         results.put("cutInSpeedRpm", cutIn * (1 + 1e-6));
@@ -139,7 +139,7 @@ class DesignLibraryTest {
         assertEquals(List.copyOf(EXAMPLES.keySet()), library.loadDemos(EXAMPLES));
         assertEquals(first, library.demos());
         Map<String, String> changed = new java.util.TreeMap<>(EXAMPLES);
-        changed.put("axial-wind-24v", EXAMPLES.get("axial-wind-24v").replace("Invented demonstration design.", "Invented."));
+        changed.put("axial-wind-48v", EXAMPLES.get("axial-wind-48v").replace("Invented demonstration design.", "Invented."));
         library.loadDemos(changed);
         assertEquals(2, library.history(first.get(0).designId()).size(), "a changed example adds one revision");
         assertEquals(first.get(0).designId(), library.demos().get(0).designId(), "its link is kept");

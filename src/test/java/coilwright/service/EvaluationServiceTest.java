@@ -24,7 +24,7 @@ class EvaluationServiceTest {
 
     /** The axial example with resistors in place of the battery: every point is solved directly. */
     static EvaluationRequest resistiveAxial() throws IOException {
-        try (InputStream in = EvaluationServiceTest.class.getClassLoader().getResourceAsStream("examples/axial-wind-24v.json")) {
+        try (InputStream in = EvaluationServiceTest.class.getClassLoader().getResourceAsStream("examples/axial-wind-48v.json")) {
             EvaluationRequest d = Json.mapper().readValue(in, DesignDocument.class).design();
             return new EvaluationRequest(d.alternator(), new ResistiveLoad(2.0, Cable.NONE), new SpeedRange(0, 500, 11), 0, 0);
         }
@@ -52,7 +52,7 @@ class EvaluationServiceTest {
         EvaluationService service = new EvaluationService();
         EvaluationRequest r = resistiveAxial();
         AlternatorEvaluation a = service.evaluate(r);
-        AlternatorEvaluation b = service.evaluate(new EvaluationRequest(r.alternator().withTurnsPerCoil(30), r.load(),
+        AlternatorEvaluation b = service.evaluate(new EvaluationRequest(r.alternator().withTurnsPerCoil(20), r.load(),
                 r.speedRange(), 0, 0));
         assertTrue(b.alternator().keLineRmsVPerRpm() < a.alternator().keLineRmsVPerRpm(), "fewer turns, less EMF");
     }

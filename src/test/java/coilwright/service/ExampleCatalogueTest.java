@@ -20,7 +20,7 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
 public class ExampleCatalogueTest {
-    static final List<String> SHIPPED = List.of("axial-wind-24v", "radial-hydro-48v", "rewound-motor-12v");
+    static final List<String> SHIPPED = List.of("axial-wind-48v", "radial-hydro-48v", "rewound-motor-12v");
 
     /** A class loader over a directory with {@code examples/} holding the shipped files plus {@code extra}. */
     public static URLClassLoader withExtraExample(Path dir, String extraSlug, String extraTitle) throws IOException {
@@ -31,7 +31,7 @@ public class ExampleCatalogueTest {
             }
         }
         String axial = new String(ExampleCatalogueTest.class.getClassLoader()
-                .getResourceAsStream("examples/axial-wind-24v.json").readAllBytes(), java.nio.charset.StandardCharsets.UTF_8);
+                .getResourceAsStream("examples/axial-wind-48v.json").readAllBytes(), java.nio.charset.StandardCharsets.UTF_8);
         String extra = axial.replaceFirst("\"title\"\\s*:\\s*\"[^\"]*\"", "\"title\": \"" + extraTitle + "\"");
         Files.writeString(examples.resolve(extraSlug + ".json"), extra);
         return new URLClassLoader(new URL[] {dir.toUri().toURL()}, null);
@@ -95,6 +95,6 @@ public class ExampleCatalogueTest {
         assertEquals("example", e.errors().get(0).field());
         assertEquals("example = \"nope\": must name one of the example designs", e.errors().get(0).message());
         assertEquals(String.join(", ", SHIPPED), e.errors().get(0).allowed());
-        assertEquals("axial-wind-24v", catalogue.require("example", "axial-wind-24v").slug());
+        assertEquals("axial-wind-48v", catalogue.require("example", "axial-wind-48v").slug());
     }
 }

@@ -94,7 +94,7 @@ class SizingWorkedExampleTest {
     private static double lineOhm() {
         AirCoredStator s = (AirCoredStator) chosen.alternator().stator();
         double roomM = 2 * PI * 0.135 / 18 - 0.001;                   // per coil at the magnets' inner radius
-        assertEquals(roomM / 3, s.coilHoleInnerWidthM(), 1e-9, "hole a third of the room (narrower than a magnet)");
+        assertEquals(roomM / 3, s.openingInnerEndWidthM(), 1e-9, "hole a third of the room (narrower than a magnet)");
         double legM = (roomM - roomM / 3) / 2;                        // 15.4 mm
         double holeOuterM = 2 * PI * 0.185 / 18 - 0.001 - 2 * legM;   // 32.8 mm
         double mltM = roomM / 3 + holeOuterM + 2 * hypot(0.050, (holeOuterM - roomM / 3) / 2) + PI * legM;  // 0.198 m

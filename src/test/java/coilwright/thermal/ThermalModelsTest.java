@@ -12,7 +12,7 @@ import static org.junit.jupiter.api.Assertions.*;
 
 class ThermalModelsTest {
     static final DiscStatorThermal DISC = DiscStatorThermal.of(
-            new AxialDualRotor("N42", 0.04, 0.05, 0.16, 0.01, 0.018, 0.0015), new AirCoredStator(0.022, 0.024, 0.034),
+            new AxialDualRotor("N42", 0.04, 0.05, 0.16, 0.01, 0.018, 0.0015), AirCoredStator.ofOpeningEnds(0.022, 0.024, 0.034),
             0.45);
     static final RadialSurfaceRotor RADIAL = new RadialSurfaceRotor(RotorSide.INNER, "N42SH", 0.14, 0.08, 0.001,
             0.004, 0.8, 0.0025);

@@ -19,7 +19,7 @@ class ThermalPropertiesTest {
                                                  @ForAll @Scale(4) @DoubleRange(min = 0.005, max = 0.03) double thick,
                                                  @ForAll @Scale(4) @DoubleRange(min = 0.1, max = 0.6) double fill) {
         DiscStatorThermal m = DiscStatorThermal.of(new AxialDualRotor("N42", 0.04, 0.05, 0.16, 0.01, thick, 0.0015),
-                new AirCoredStator(0.02, 0.024, 0.034), fill);
+                AirCoredStator.ofOpeningEnds(0.02, 0.024, 0.034), fill);
         check(m, new CoolingConditions(rpm, ambient, 0), heat);
     }
 

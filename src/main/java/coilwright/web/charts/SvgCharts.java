@@ -57,15 +57,64 @@ public final class SvgCharts {
             plot.mapDatasetToRangeAxis(1, 1);
             plot.setRenderer(1, renderer(spec.leftSeries().size(), spec.rightSeries().size(), true));
         });
+        return svg(chart, spec.title(), spec.widthPx(), spec.heightPx());
+    }
+
+    /**
+     * Bars by category, one bar per series in each category, on a value axis from {@code valueFrom} to
+     * {@code valueTo} (for example winding factors 0 to 1 by harmonic order).
+     *
+     * @param series legend name to one value per category, in category order (a single series has no legend)
+     */
+    public static String barChart(String title, ChartSpec.Axis category, ChartSpec.Axis value, List<String> categories,
+                                  java.util.Map<String, double[]> series, double valueFrom, double valueTo,
+                                  int widthPx, int heightPx) {
+        org.jfree.data.category.DefaultCategoryDataset data = new org.jfree.data.category.DefaultCategoryDataset();
+        series.forEach((name, values) -> {
+            if (values.length != categories.size()) {
+                throw new IllegalArgumentException("series " + name + ": " + values.length + " values for "
+                        + categories.size() + " categories");
+            }
+            for (int i = 0; i < values.length; i++) {
+                data.addValue(values[i], name, categories.get(i));
+            }
+        });
+        JFreeChart chart = ChartFactory.createBarChart(title, category.text(), value.text(), data,
+                PlotOrientation.VERTICAL, series.size() > 1, false, false);
+        org.jfree.chart.plot.CategoryPlot plot = chart.getCategoryPlot();
+        chart.setBackgroundPaint(Color.WHITE);
+        chart.getTitle().setFont(new Font(FONT, Font.BOLD, 15));
+        if (chart.getLegend() != null) {
+            chart.getLegend().setItemFont(new Font(FONT, Font.PLAIN, 13));
+        }
+        plot.setBackgroundPaint(Color.WHITE);
+        plot.setRangeGridlinePaint(new Color(0xc9cfd4));
+        plot.setOutlinePaint(new Color(0x8a949c));
+        plot.getRangeAxis().setRange(valueFrom, valueTo);
+        styleAxis(plot.getRangeAxis());
+        plot.getDomainAxis().setLabelFont(new Font(FONT, Font.PLAIN, 14));
+        plot.getDomainAxis().setTickLabelFont(new Font(FONT, Font.PLAIN, 13));
+        org.jfree.chart.renderer.category.BarRenderer bars = (org.jfree.chart.renderer.category.BarRenderer) plot.getRenderer();
+        bars.setBarPainter(new org.jfree.chart.renderer.category.StandardBarPainter());
+        bars.setShadowVisible(false);
+        bars.setItemMargin(0.05);
+        for (int i = 0; i < series.size(); i++) {
+            bars.setSeriesPaint(i, PALETTE.get((i + 1) % PALETTE.size()));
+        }
+        return svg(chart, title, widthPx, heightPx);
+    }
+
+    /** Draws a chart into one {@code <svg>} element with its own id, {@code role="img"} and a {@code <title>}. */
+    static String svg(JFreeChart chart, String title, int widthPx, int heightPx) {
         String id = "chart-" + IDS.incrementAndGet();
-        SVGGraphics2D g2 = new SVGGraphics2D(spec.widthPx(), spec.heightPx());
+        SVGGraphics2D g2 = new SVGGraphics2D(widthPx, heightPx);
         g2.setDefsKeyPrefix(id + "-");
         g2.setGeomDoubleConverter(SvgCharts::twoDecimals);
-        chart.draw(g2, new Rectangle(0, 0, spec.widthPx(), spec.heightPx()));
+        chart.draw(g2, new Rectangle(0, 0, widthPx, heightPx));
         String svg = g2.getSVGElement(id);
         int open = svg.indexOf('>', svg.indexOf("<svg"));
         return svg.substring(0, open) + " role=\"img\" aria-labelledby=\"" + id + "-title\">"
-                + "<title id=\"" + id + "-title\">" + escape(spec.title()) + "</title>" + svg.substring(open + 1);
+                + "<title id=\"" + id + "-title\">" + escape(title) + "</title>" + svg.substring(open + 1);
     }
 
     private static XYSeriesCollection dataset(List<Series> series) {

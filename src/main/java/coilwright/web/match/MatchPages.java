@@ -38,7 +38,7 @@ public final class MatchPages {
     }
 
     public void windForm(Context ctx) {
-        ctx.render("match-wind", model(starting(WindPageForm.defaults(example(ctx, "axial-wind-24v")))));
+        ctx.render("match-wind", model(starting(WindPageForm.defaults(example(ctx, "axial-wind-48v")))));
     }
 
     public void windResult(Context ctx) {

@@ -27,9 +27,9 @@ public record RotorFields(double diameterM, int bladeCount, double cpMax, double
         c.throwIfAny();
     }
 
-    /** A 3 m three-blade rotor, Cp 0.40 at tip-speed ratio 7, furling at 500 rpm, direct drive (the axial example's rotor). */
+    /** A 2.4 m three-blade rotor, Cp 0.40 at tip-speed ratio 6.5, governed at 600 rpm, direct drive (the axial example's rotor). */
     static RotorFields defaults() {
-        return new RotorFields(3.0, 3, 0.40, 7.0, 500, 1.0, 1.0);
+        return new RotorFields(2.4, 3, 0.40, 6.5, 600, 1.0, 1.0);
     }
 
     WindRotor toRotor() {

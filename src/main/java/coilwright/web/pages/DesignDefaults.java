@@ -36,7 +36,7 @@ final class DesignDefaults {
     static final EvaluationRequest AXIAL_BATTERY = new EvaluationRequest(
             new AlternatorSpec(new WindingSpec(9, 12, 3, Layers.DOUBLE, 0, 1, 0.0), 40, Connection.STAR,
                     new AxialDualRotor("N42", 0.046, 0.030, 0.13, 0.010, 0.012, 0.0015),
-                    new AirCoredStator(0.015, 0.025, 0.035), WireSpec.awg(15, 2), Cooling.AIR_COOLED_AXIAL_OPEN_COIL,
+                    new AirCoredStator(0.015, 0.030, 0.010), WireSpec.awg(15, 2), Cooling.AIR_COOLED_AXIAL_OPEN_COIL,
                     ThermalClass.H, 60, 40, 0, 0),
             new BatteryLoad(Battery.of(Chemistry.LEAD_ACID, 12, ChargeStage.NOMINAL),
                     new Rectifier(BridgeType.THREE_PHASE_BRIDGE, DiodeType.SILICON), new Cable(20, 6e-6, 25),

@@ -19,11 +19,11 @@ final class DesignFields {
     private static Map<String, Shown> build() {
         Map<String, Shown> m = new LinkedHashMap<>();
         for (String f : new String[] {"gapDiameterM", "stackLengthM", "airGapM", "magnetThicknessM", "slotOpeningM",
-                "magnetWidthM", "magnetLengthM", "magnetCentreRadiusM", "statorThicknessM", "runningClearanceM"}) {
+                "magnetWidthM", "magnetLengthM", "magnetCentreRadiusM", "coilLayerThicknessM", "clearancePerSideM"}) {
             m.put("alternator.rotor." + f, Shown.MM);
         }
         for (String f : new String[] {"slotDepthM", "slotWidthM", "toothTipHeightM", "slotLinerThicknessM",
-                "endExtensionM", "coilLegWidthM", "coilHoleInnerWidthM", "coilHoleOuterWidthM"}) {
+                "endExtensionM", "conductorBandWidthM", "openingMidWidthM", "openingTaperM"}) {
             m.put("alternator.stator." + f, Shown.MM);
         }
         m.put("alternator.wire.bareDiameterM", Shown.MM);

@@ -12,7 +12,6 @@ import coilwright.magnet.MagnetGrades;
 import coilwright.web.Choice;
 import coilwright.web.FormResult;
 import coilwright.web.units.Units;
-import coilwright.winding.Layers;
 import java.net.URLEncoder;
 import java.nio.charset.StandardCharsets;
 import java.util.HashMap;
@@ -45,7 +44,7 @@ final class DesignFormModel {
         m.put("loadTypes", Choice.labelled(loads));
         m.put("grades", Choice.of(MagnetGrades.names()));
         m.put("phases", Choice.of("3", "1"));
-        m.put("layers", Choice.names(Layers.values()));
+        m.put("layers", Choice.LAYERS);
         m.put("connections", Choice.names(Connection.values()));
         m.put("gauges", Choice.names(WireGauge.values()));
         m.put("grades12", Choice.of("2", "1"));

@@ -43,7 +43,7 @@ public final class WindingPage {
     }
 
     private static Map<String, Object> model(FormResult form) {
-        return new HashMap<>(Map.of("form", form, "layers", Choice.of("DOUBLE", "SINGLE"), "phases", Choice.of("3", "1")));
+        return new HashMap<>(Map.of("form", form, "layers", Choice.LAYERS, "phases", Choice.of("3", "1")));
     }
 
     private static Map<String, List<String>> apiNames(Map<String, String> typed) {

@@ -72,7 +72,8 @@ final class RewindForm {
 
     /** Starting values of the bare-stator form. */
     static Map<String, String> statorDefaults() {
-        return Map.of("slots", "36", "phases", "3", "layers", "DOUBLE", "minPoles", "2", "maxPoles", "48");
+        return Map.of("slots", "36", "phases", "3", "layers", "DOUBLE", "minPoles", "2", "maxPoles", "48",
+                "rankBy", "WINDING_FACTOR");
     }
 
     /** The posted fields with the form's edge rules applied (blank zero-fields as 0, blank window dropped). */

@@ -13,6 +13,11 @@ import java.util.Map;
 
 /** The model of the {@code rewind} template: both forms, and the plan or the pole options when there are any. */
 final class RewindModel {
+    /** The orders the pole options can be listed in, as the form offers them. */
+    static final java.util.List<Choice> RANKINGS = java.util.List.of(
+            new Choice("WINDING_FACTOR", "Highest winding factor first"),
+            new Choice("COGGING", "Most cogging cycles (smoothest) first"),
+            new Choice("BALANCED", "A balance of winding factor, cogging and pull"));
     private RewindModel() {
     }
 
@@ -22,7 +27,8 @@ final class RewindModel {
         model.put("form", form);
         model.put("statorForm", statorForm);
         model.put("poleLinks", new PoleLinks());
-        model.put("layers", Choice.of("DOUBLE", "SINGLE"));
+        model.put("layers", Choice.LAYERS);
+        model.put("rankings", RANKINGS);
         model.put("connections", Choice.of("STAR", "DELTA"));
         model.put("gauges", Choice.of("AWG", "METRIC"));
         model.put("windowKinds", Choice.of("AIR_CORED", "SLOTTED"));
@@ -45,6 +51,6 @@ final class RewindModel {
     private static StatorOptionsResult sameStator(RewindRequest request, RewindService service) {
         var m = request.machine();
         return service.statorOptions(new StatorOptionsRequest(m.slots(), m.phases(), m.layers(), 2,
-                Math.max(2, Math.min(WindingSpec.MAX_POLES, 2 * m.slots()))));
+                Math.max(2, Math.min(WindingSpec.MAX_POLES, 2 * m.slots())), java.util.Optional.empty()));
     }
 }

@@ -33,15 +33,15 @@ class ExamplesApiTest {
         Response r = given().get(LIST);
         OpenApiContract.assertMatches(r, LIST, "GET");
         r.then().statusCode(200).contentType(startsWith("application/json"))
-                .body("slug", contains("axial-wind-24v", "radial-hydro-48v", "rewound-motor-12v"))
-                .body("href", contains("/api/v1/examples/axial-wind-24v", "/api/v1/examples/radial-hydro-48v",
+                .body("slug", contains("axial-wind-48v", "radial-hydro-48v", "rewound-motor-12v"))
+                .body("href", contains("/api/v1/examples/axial-wind-48v", "/api/v1/examples/radial-hydro-48v",
                         "/api/v1/examples/rewound-motor-12v"))
-                .body("find { it.slug == 'axial-wind-24v' }.title",
-                        equalTo(Bodies.example("axial-wind-24v").get("title").asText()));
+                .body("find { it.slug == 'axial-wind-48v' }.title",
+                        equalTo(Bodies.example("axial-wind-48v").get("title").asText()));
     }
 
     @ParameterizedTest
-    @ValueSource(strings = {"axial-wind-24v", "radial-hydro-48v", "rewound-motor-12v"})
+    @ValueSource(strings = {"axial-wind-48v", "radial-hydro-48v", "rewound-motor-12v"})
     void each_example_is_served_as_the_same_design_document_as_its_file(String slug) throws Exception {
         Response r = given().get("/api/v1/examples/" + slug);
         OpenApiContract.assertMatches(r, ONE, "GET");
@@ -57,7 +57,7 @@ class ExamplesApiTest {
                 .body("type", equalTo("/problems/not-found"))
                 .body("instance", equalTo("/api/v1/examples/no-such-design"))
                 .body("detail", equalTo("There is no example named 'no-such-design'. The examples are: "
-                        + "axial-wind-24v, radial-hydro-48v, rewound-motor-12v."));
+                        + "axial-wind-48v, radial-hydro-48v, rewound-motor-12v."));
     }
 
     @Test

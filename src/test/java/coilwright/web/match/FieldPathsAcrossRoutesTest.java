@@ -29,7 +29,7 @@ class FieldPathsAcrossRoutesTest {
 
     /** Each route with a valid body built on the axial (wind) or the radial (hydro) example. */
     private static Map<String, ObjectNode> bodies() throws IOException {
-        ObjectNode evaluate = MatchApiTest.example("axial-wind-24v");
+        ObjectNode evaluate = MatchApiTest.example("axial-wind-48v");
         evaluate.putObject("speedRange").put("minRpm", 0).put("maxRpm", 500).put("points", 11);
         evaluate.put("ratedSpeedRpm", 0).put("maxSpeedRpm", 0);
         return Map.of("/api/v1/evaluate", evaluate, "/api/v1/match/wind", MatchApiTest.windBody(),

@@ -45,7 +45,7 @@ class MatchApiTest {
     }
 
     static ObjectNode windBody() throws IOException {
-        ObjectNode b = example("axial-wind-24v");
+        ObjectNode b = example("axial-wind-48v");
         ObjectNode rotor = b.putObject("rotor");
         rotor.put("diameterM", 3.6).put("bladeCount", 3);
         rotor.putObject("curve").put("type", "ParametricCp").put("cpMax", 0.42).put("tipSpeedRatioOpt", 6.5);

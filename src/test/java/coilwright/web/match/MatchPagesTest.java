@@ -32,12 +32,12 @@ class MatchPagesTest {
 
     private static Map<String, String> windForm() {
         Map<String, String> f = new HashMap<>();
-        f.put("example", "axial-wind-24v");
-        f.put("rotor.diameterM", "3.6");
+        f.put("example", "axial-wind-48v");
+        f.put("rotor.diameterM", "2.6");
         f.put("rotor.bladeCount", "3");
         f.put("rotor.cpMax", "0.42");
         f.put("rotor.tipSpeedRatioOpt", "6.5");
-        f.put("rotor.maxRotorSpeedRpm", "450");
+        f.put("rotor.maxRotorSpeedRpm", "550");
         f.put("rotor.driveRatio", "1");
         f.put("rotor.drivetrainEfficiency", "1");
         f.put("site.altitudeM", "0");
@@ -50,11 +50,12 @@ class MatchPagesTest {
 
     @Test
     void the_wind_form_starts_from_an_example_design_with_rotor_defaults() {
-        Html page = Html.of(given().queryParam("example", "axial-wind-24v").get("/match/wind").then().statusCode(200)
+        Html page = Html.of(given().queryParam("example", "axial-wind-48v").get("/match/wind").then().statusCode(200)
                 .contentType(startsWith("text/html")).extract().response());
-        assertTrue(page.doc().selectFirst(".lead strong").text().startsWith("Axial-flux alternator for a 3 m wind rotor"));
-        assertEquals("3.0", page.value("rotor.diameterM"));
-        assertEquals("axial-wind-24v", page.selected("example"));
+        assertTrue(page.doc().selectFirst(".lead strong").text().startsWith("Axial-flux alternator for a 2.4 m wind rotor"));
+        assertEquals("2.4", page.value("rotor.diameterM"));
+        assertEquals("6.5", page.value("rotor.tipSpeedRatioOpt"));
+        assertEquals("axial-wind-48v", page.selected("example"));
         assertFalse(page.has("results"));
     }
 
@@ -78,12 +79,16 @@ class MatchPagesTest {
         Html page = post("/match/wind", windForm(), 200);
         assertTrue(page.has("results"));
         assertEquals(2, page.all("#results .chart svg").size());
-        assertTrue(page.text().contains("Alternator demand at the rotor shaft"));
+        String field = page.all("#results .chart svg").get(0).text();
+        assertTrue(field.contains("Operating line through the rotor's torque field"), field);
+        assertTrue(field.contains("Alternator's torque (operating line)") && field.contains("Wind speed (m/s)"), field);
+        assertTrue(field.contains("6 m/s") && field.contains("10 m/s"), "the matched points carry their wind speeds");
+        assertTrue(page.all("#results .chart svg").get(1).text().contains("Ideal rotor (best tip-speed ratio)"));
         assertFalse(page.all("#energy tbody tr").isEmpty());
         assertTrue(page.id("annual-energy").selectFirst(".value").text().endsWith("kWh"));
         assertTrue(page.all(".cautions-list .caution").eachText().stream()
                 .anyMatch(t -> t.contains("Open-circuit line voltage")), "the open-circuit voltage caution");
-        assertEquals("3.6", page.value("rotor.diameterM"), "the form keeps what was entered");
+        assertEquals("2.6", page.value("rotor.diameterM"), "the form keeps what was entered");
     }
 
     @Test

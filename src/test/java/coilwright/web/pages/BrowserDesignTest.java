@@ -93,10 +93,11 @@ class BrowserDesignTest {
             screenshot(d, "results-resistor");
             elementShot(d, ".summary", "results-resistor-summary");
             elementShot(d, ".charts", "results-resistor-charts");
-            elementShot(d, ".winding-grid", "results-resistor-winding");
+            elementShot(d, "section.winding", "results-resistor-winding");
             assertEquals("none", d.findElement(By.cssSelector("#cut-in .value")).getText());
-            assertEquals(3, d.findElements(By.cssSelector(".chart svg")).size());
-            assertEquals(9, d.findElements(By.cssSelector(".winding-diagram path.coil")).size(), "9 coils in the 9 slots of the form, double layer");
+            assertEquals(3, d.findElements(By.cssSelector(".charts .chart svg")).size(), "the speed-range charts");
+            assertEquals(9, d.findElements(By.cssSelector("figure.unrolled.wide g.loop")).stream()
+                    .map(e -> e.getAttribute("data-coil")).distinct().count(), "9 coils in the 9 slots of the form, double layer");
         }
     }
 
@@ -111,7 +112,10 @@ class BrowserDesignTest {
             d.manage().window().setSize(new Dimension(1300, 2600));
             screenshot(d, "winding-12s10p");
             // source: El-Refaie, IEEE Trans. Ind. Electron. 57(1), 2010: 12 slots / 10 poles double layer kw1 = 0.933
-            assertEquals("0.9330", d.findElement(By.cssSelector("table.factors tbody tr td:nth-child(2)")).getText());
+            assertEquals("0.9330", d.findElement(By.cssSelector("[data-fact=fundamental] .fact-value")).getText());
+            d.findElement(By.cssSelector(".factor-numbers summary")).click();
+            assertEquals("0.9330", d.findElement(By.cssSelector("table.factors tbody tr:first-child td")).getText(),
+                    "the numbers behind the chart open without JavaScript");
             assertEquals(3, d.findElements(By.cssSelector(".phase-order li")).size());
             assertTrue(d.getCurrentUrl().contains("slots=12"), "the layout has a link of its own: " + d.getCurrentUrl());
         }

@@ -93,8 +93,9 @@ class DesignPagesTest {
         assertEquals("a resistor bank takes current at any speed", page.id("cut-in").selectFirst(".note").text());
         assertEquals(3, page.all(".charts .chart svg").size());
         assertTrue(page.text().contains("EMF and terminal voltage"));
-        assertFalse(page.all(".winding-diagram").isEmpty(), "the winding diagram");
-        assertTrue(page.all("table.factors caption").get(0).text().contains("Winding factors by harmonic"));
+        assertFalse(page.all("figure.unrolled").isEmpty(), "the unrolled winding");
+        assertTrue(page.all(".factor-chart svg").text().contains("Winding factor by harmonic order"));
+        assertEquals("details", page.all("table.factors").get(0).closest("details").tagName(), "numbers behind a disclosure");
     }
 
     @Test
@@ -133,10 +134,10 @@ class DesignPagesTest {
     @Test
     void a_length_out_of_range_is_named_in_the_apis_si_terms() {
         Map<String, String> f = defaultForm();
-        f.put("alternator.rotor.runningClearanceM", "0");
+        f.put("alternator.rotor.clearancePerSideM", "0");
         Html page = post(f, 400);
-        assertTrue(page.error("alternator.rotor.runningClearanceM").startsWith("alternator.rotor.runningClearanceM = 0.0"),
-                page.error("alternator.rotor.runningClearanceM"));
+        assertTrue(page.error("alternator.rotor.clearancePerSideM").startsWith("alternator.rotor.clearancePerSideM = 0.0"),
+                page.error("alternator.rotor.clearancePerSideM"));
     }
 
     @Test

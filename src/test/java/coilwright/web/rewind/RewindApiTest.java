@@ -83,7 +83,7 @@ class RewindApiTest {
 
     @Test
     void a_round_trip_from_an_evaluated_design_recovers_its_pole_count_and_the_turns_of_a_rewound_one() throws IOException {
-        AlternatorSpec spec = example("examples/axial-wind-24v.json").alternator();
+        AlternatorSpec spec = example("examples/axial-wind-48v.json").alternator();
         Alternator now = AlternatorModel.build(spec);
         int wantedTurns = spec.turnsPerCoil() * 3 / 4;
         Alternator rewound = AlternatorModel.build(spec.withTurnsPerCoil(wantedTurns));
@@ -248,6 +248,20 @@ class RewindApiTest {
         assertEquals(List.of(8, 16), poles.subList(2, 4).stream().sorted().toList());
         assertEquals(0.8660, j.getDouble("options[2].fundamentalWindingFactor"), 5e-5);
         assertFalse(poles.contains(12), "12 slots / 12 poles cannot be balanced");
+    }
+
+    @Test
+    void stator_options_come_in_the_order_asked_for_and_say_which() {
+        Response plain = post(STATOR, "{\"slots\":12,\"phases\":3,\"layers\":\"DOUBLE\",\"minPoles\":2,\"maxPoles\":16}");
+        plain.then().statusCode(200).body("rankBy", equalTo("WINDING_FACTOR"));
+        Response balanced = post(STATOR, "{\"slots\":12,\"phases\":3,\"layers\":\"DOUBLE\",\"minPoles\":2,"
+                + "\"maxPoles\":16,\"rankBy\":\"BALANCED\"}");
+        OpenApiContract.assertMatches(balanced, STATOR, "POST");
+        // 4 poles (factor 1) and 14 poles (84 cogging cycles) are beaten on no count; see PoleRankingTest
+        balanced.then().statusCode(200).body("rankBy", equalTo("BALANCED"))
+                .body("options.poles", equalTo(List.of(4, 14, 2, 10, 16, 8)));
+        post(STATOR, "{\"slots\":12,\"phases\":3,\"layers\":\"DOUBLE\",\"minPoles\":2,\"maxPoles\":16,"
+                + "\"rankBy\":\"CHEAPEST\"}").then().statusCode(400).body("errors[0].field", equalTo("rankBy"));
     }
 
     @Test

@@ -157,14 +157,32 @@ class RewindPageTest {
     void a_bare_stator_lists_its_pole_options_with_links_to_the_design_form() {
         Map<String, String> f = Map.of("slots", "12", "phases", "3", "layers", "DOUBLE", "minPoles", "8", "maxPoles", "16");
         Html page = post("/rewind/stator-options", f, 200);
-        Element first = page.id("stator-options").selectFirst("table.pole-options tr:nth-child(2)");
+        Element first = page.id("stator-options").selectFirst("table.pole-options tbody tr");
         List<String> cells = first.select("td").eachText();
         assertTrue(List.of("10", "14").contains(cells.get(0)), cells.toString());
         assertTrue(List.of("2/5", "2/7").contains(cells.get(1)), cells.toString());
-        Map<String, String> link = query(first.selectFirst("a").attr("href"));
+        Map<String, String> layout = query(first.selectFirst("a[href^=/winding]").attr("href"));
+        assertEquals(Map.of("slots", "12", "poles", cells.get(0), "phases", "3", "layers", "DOUBLE"), layout);
+        Map<String, String> link = query(first.selectFirst("a[href^=/design]").attr("href"));
         assertEquals("12", link.get("alternator.winding.slots"));
         assertEquals(cells.get(0), link.get("alternator.winding.poles"));
         assertEquals("12", page.value("slots"), "the stator form keeps what was entered");
+    }
+
+    @Test
+    void a_bare_stator_can_list_the_smoothest_options_first_with_plain_column_names() {
+        Map<String, String> f = Map.of("slots", "12", "phases", "3", "layers", "DOUBLE", "minPoles", "2", "maxPoles", "16",
+                "rankBy", "COGGING");
+        Html page = post("/rewind/stator-options", f, 200);
+        List<String> order = page.all("#stator-options table.pole-options tbody tr").eachAttr("data-poles");
+        // LCM(12, 2p): 14 poles 84, 10 poles 60, 16 poles 48, 8 poles 24, 4 and 2 poles 12
+        assertEquals(List.of("14", "10", "16", "8", "4", "2"), order);
+        List<String> heads = page.all("#stator-options table.pole-options thead th").eachText();
+        assertTrue(heads.contains("Cogging cycles per revolution") && heads.contains("Winding factor")
+                && heads.contains("Magnetic pull"), heads.toString());
+        assertTrue(heads.stream().noneMatch(h -> h.matches(".*(kw|LCM|gcd).*")), heads.toString());
+        assertFalse(page.all("#stator-options .column-notes dt").isEmpty(), "each column is explained");
+        assertEquals("COGGING", page.selected("rankBy"));
     }
 
     @Test

@@ -226,7 +226,7 @@ class SavedDesignApiTest {
         for (int i = 0; i < rows.size(); i++) {
             assertEquals(speeds.get(i), Double.parseDouble(rows.get(i).get("Speed (rpm)")), 0.0);
         }
-        assertEquals(500.0, Double.parseDouble(rows.get(20).get("Speed (rpm)")), 0.0);
+        assertEquals(600.0, Double.parseDouble(rows.get(20).get("Speed (rpm)")), 0.0);
         given().get("/api/v1/designs/" + saved.path("designId") + "/curves.csv").then().statusCode(200)
                 .body(equalTo(text));
     }
@@ -242,18 +242,18 @@ class SavedDesignApiTest {
 
     @Test
     void compare_marks_the_input_fields_and_key_results_that_differ() {
-        String a = save(SavedFixtures.document("Compare A", "", 30)).path("revisionId");
-        String b = save(SavedFixtures.document("Compare B", "", 45)).path("revisionId");
+        String a = save(SavedFixtures.document("Compare A", "", 20)).path("revisionId");
+        String b = save(SavedFixtures.document("Compare B", "", 30)).path("revisionId");
         Response r = given().queryParam("a", a).queryParam("b", b).get("/api/v1/compare");
         r.then().statusCode(200).body("a.revisionId", equalTo(a)).body("b.revisionId", equalTo(b))
                 .body("inputDifferences.path", equalTo(List.of("title", "design.alternator.turnsPerCoil")))
-                .body("inputDifferences[1].a", equalTo("30")).body("inputDifferences[1].b", equalTo("45"))
+                .body("inputDifferences[1].a", equalTo("20")).body("inputDifferences[1].b", equalTo("30"))
                 .body("results.find { it.key == 'keLineRmsVPerRpm' }.differs", equalTo(true))
                 .body("results.find { it.key == 'maxSpeedRpm' }.differs", equalTo(false));
         OpenApiContract.assertMatches(r, "/api/v1/compare", "GET");
         double keA = r.path("results.find { it.key == 'keLineRmsVPerRpm' }.a");
         double keB = r.path("results.find { it.key == 'keLineRmsVPerRpm' }.b");
-        assertEquals(45.0 / 30.0, keB / keA, 1e-9, "Ke is proportional to turns per coil");
+        assertEquals(30.0 / 20.0, keB / keA, 1e-9, "Ke is proportional to turns per coil");
         Response missing = given().queryParam("a", a).get("/api/v1/compare");
         missing.then().statusCode(400).body("errors[0].field", equalTo("b"));
         OpenApiContract.assertMatches(missing, "/api/v1/compare", "GET");

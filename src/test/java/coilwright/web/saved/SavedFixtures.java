@@ -17,7 +17,7 @@ final class SavedFixtures {
     }
 
     static String document(String title, String notes, int turnsPerCoil) {
-        try (InputStream in = SavedFixtures.class.getClassLoader().getResourceAsStream("examples/axial-wind-24v.json")) {
+        try (InputStream in = SavedFixtures.class.getClassLoader().getResourceAsStream("examples/axial-wind-48v.json")) {
             ObjectNode doc = (ObjectNode) Json.mapper().readTree(new String(in.readAllBytes(), StandardCharsets.UTF_8));
             doc.put("title", title);
             doc.put("notes", notes);
