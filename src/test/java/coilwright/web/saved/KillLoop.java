@@ -131,7 +131,7 @@ final class KillLoop {
         for (int i = 0; !stop.get(); i++) {
             String title = (reviser ? "revision " : "save ") + tag + "-" + i;
             String notes = "notes " + tag + "-" + i + " ✓";
-            int turns = 24 + Math.floorMod((tag + i).hashCode(), 24);
+            int turns = SavedFixtures.loopTurns((tag + i).hashCode());
             String doc = SavedFixtures.document(title, notes, turns);
             try {
                 HttpResponse<String> r = reviser

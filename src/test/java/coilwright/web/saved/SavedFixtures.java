@@ -32,6 +32,16 @@ final class SavedFixtures {
         }
     }
 
+    /** Fewest turns per coil the crash and two-instance loops vary over; the example's coil window holds them all. */
+    static final int LOOP_TURNS_MIN = 20;
+    /** Number of turns-per-coil values the loops vary over (20 to 39); 43 and more overfill the example's window. */
+    static final int LOOP_TURNS_CHOICES = 20;
+
+    /** The turns per coil for the k-th save or revision of a loop; always one the example's window holds. */
+    static int loopTurns(int k) {
+        return LOOP_TURNS_MIN + Math.floorMod(k, LOOP_TURNS_CHOICES);
+    }
+
     static String document(String title) {
         return document(title, "Test notes.", 36);
     }

@@ -106,7 +106,7 @@ class TwoInstancesTest {
                 List<Ack> acks = new ArrayList<>();
                 for (int i = 0; i < REVISIONS_PER_THREAD; i++) {
                     String notes = "thread " + thread + " revision " + i;
-                    int turns = 24 + (thread * REVISIONS_PER_THREAD + i) % 24;
+                    int turns = SavedFixtures.loopTurns(thread * REVISIONS_PER_THREAD + i);
                     JsonNode r = json(post(target, "/api/v1/designs/" + id + "/revisions",
                             SavedFixtures.document("Shared", notes, turns), token), 201);
                     acks.add(new Ack(r.get("revisionId").asText(), notes, turns));
