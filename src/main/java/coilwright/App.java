@@ -26,6 +26,7 @@ import coilwright.web.rewind.RewindApi;
 import coilwright.web.rewind.RewindPage;
 import coilwright.web.saved.SavedDesignApi;
 import coilwright.web.saved.SavedDesignPages;
+import coilwright.web.sizing.SizingApi;
 import coilwright.web.units.Units;
 import io.javalin.Javalin;
 import io.javalin.http.staticfiles.Location;
@@ -113,6 +114,7 @@ public final class App {
         MatchApi matchApi = new MatchApi(services.matching(), binder);
         RewindApi rewindApi = new RewindApi(services.rewind(), binder);
         SavedDesignApi savedApi = new SavedDesignApi(services.designs());
+        SizingApi sizingApi = new SizingApi(services.sizing(), binder);
         HomePage home = new HomePage(services.examples());
         DesignPage design = new DesignPage(services.evaluation(), services.examples());
         WindingPage winding = new WindingPage(services.evaluation());
@@ -147,6 +149,10 @@ public final class App {
                 Route.get("/api/v1/revisions/{revisionId}/recomputed", savedApi::recomputed),
                 Route.get("/api/v1/compare", savedApi::compare),
                 Route.get("/api/v1/demos", savedApi::demos),
+                // JSON API: design from requirements
+                Route.post("/api/v1/sizing", sizingApi::size),
+                Route.get("/api/v1/sizing/jobs/{jobId}", sizingApi::job),
+                Route.delete("/api/v1/sizing/jobs/{jobId}", sizingApi::cancel),
                 // pages: design, winding, matching, rewinding
                 Route.get("/", home::show),
                 Route.get("/design/new", design::newDesign),
@@ -218,6 +224,7 @@ public final class App {
     /** Stops listening, waits for the demo loader, and closes the database. */
     public void stop() {
         javalin.stop();
+        services.sizing().close();
         demoLoader.shutdown();
         try {
             if (!demoLoader.awaitTermination(60, TimeUnit.SECONDS)) {

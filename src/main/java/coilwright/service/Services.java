@@ -14,9 +14,11 @@ import com.fasterxml.jackson.databind.ObjectMapper;
  * @param rewind     reconnect or rewind a measured machine; pole options of a bare stator
  * @param examples   the example designs from {@code examples/}
  * @param cache      the results of every calculation above, by request
+ * @param sizing     design from requirements: searches answered inline or run as jobs
  */
 public record Services(EvaluationService evaluation, DesignLibrary designs, MatchingService matching,
-                       RewindService rewind, ExampleCatalogue examples, ResultCache cache) {
+                       RewindService rewind, ExampleCatalogue examples, ResultCache cache,
+                       SizingJobs sizing) {
 
     /** The services over an open database, with the examples on the class path. */
     public static Services create(Database database, ObjectMapper mapper) {
@@ -28,6 +30,7 @@ public record Services(EvaluationService evaluation, DesignLibrary designs, Matc
         ResultCache cache = new ResultCache(ResultCache.DEFAULT_BUDGET_BYTES);
         EvaluationService evaluation = new EvaluationService(cache);
         return new Services(evaluation, new DesignLibrary(evaluation, new DesignStore(database), mapper,
-                DesignLibrary.currentToolVersion()), new MatchingService(cache), new RewindService(cache), examples, cache);
+                DesignLibrary.currentToolVersion()), new MatchingService(cache), new RewindService(cache), examples, cache,
+                new SizingJobs(new SizingService(), SizingJobs.Settings.defaults(), java.time.Clock.systemUTC()));
     }
 }

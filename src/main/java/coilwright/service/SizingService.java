@@ -22,7 +22,16 @@ public final class SizingService {
 
     /** @param pool the threads the searches run on */
     public SizingService(ForkJoinPool pool) {
-        this.search = new SizingSearch(pool);
+        this(pool, SizingSearch.MAX_CANDIDATES);
+    }
+
+    /**
+     * @param pool          the threads the searches run on
+     * @param maxCandidates the most candidates one search takes (a larger space is refused with its size, this cap
+     *                      and how to narrow it), 1 to {@link SizingSearch#MAX_CANDIDATES}
+     */
+    public SizingService(ForkJoinPool pool, long maxCandidates) {
+        this.search = new SizingSearch(pool, maxCandidates);
     }
 
     /**

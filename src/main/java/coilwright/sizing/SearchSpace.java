@@ -28,8 +28,8 @@ final class SearchSpace {
     private final int turnCount;
     private final long perCase;
 
-    /** @throws InvalidInputException (field {@code winding}) when the space holds more than {@link #MAX_CANDIDATES} */
-    SearchSpace(SizingRequest request, List<Layout> layouts) {
+    /** @throws InvalidInputException (field {@code winding...} or {@code build}) when the space holds more than {@code cap} */
+    SearchSpace(SizingRequest request, List<Layout> layouts, long cap) {
         this.request = request;
         List<WindingCase> c = new ArrayList<>();
         for (Layout l : layouts) {
@@ -50,24 +50,24 @@ final class SearchSpace {
         this.turnCount = request.winding().turnCount();
         this.perCase = (long) wires.size() * turnCount * connections.size();
         long size = perCase * cases.size();
-        if (size > MAX_CANDIDATES) {
-            throw tooLarge(size);
+        if (size > cap) {
+            throw tooLarge(size, cap);
         }
     }
 
-    private InvalidInputException tooLarge(long size) {
+    private InvalidInputException tooLarge(long size, long cap) {
         int sizes = request.winding().wire().sizes().size();
         String text = String.format(Locale.ROOT, "the search space holds %,d candidates, more than the %,d allowed: "
                         + "%d layouts with their parallel-path counts x %d wire sizes x %d strand counts x %d turn counts x "
                         + "%d connections. Narrow it: fewer turn counts (winding.minTurnsPerCoil to maxTurnsPerCoil), a "
                         + "narrower wire range or fewer strands (winding.wire), fewer parallel paths "
                         + "(winding.maxParallelPaths), or a narrower pole range and fewer magnets (build)", size,
-                MAX_CANDIDATES, cases.size(), sizes, request.winding().wire().maxStrands(), turnCount, connections.size());
+                cap, cases.size(), sizes, request.winding().wire().maxStrands(), turnCount, connections.size());
         String field = turnCount >= Math.max(sizes * request.winding().wire().maxStrands(), cases.size())
                 ? "winding.maxTurnsPerCoil" : sizes * request.winding().wire().maxStrands() >= cases.size()
                 ? "winding.wire" : "build";
         return new InvalidInputException(new FieldError(field, Long.toString(size), field + ": " + text,
-                "at most " + MAX_CANDIDATES + " candidates"));
+                "at most " + cap + " candidates"));
     }
 
     SizingRequest request() {

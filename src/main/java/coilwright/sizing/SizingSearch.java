@@ -21,11 +21,28 @@ import java.util.function.BooleanSupplier;
  * the pool and merged in a fixed order: the answer does not depend on the number of threads.
  */
 public final class SizingSearch {
+    /** The most candidates a search takes unless a lower cap is given. */
+    public static final long MAX_CANDIDATES = SearchSpace.MAX_CANDIDATES;
+
     private final ForkJoinPool pool;
+    private final long maxCandidates;
 
     /** @param pool the threads to use (all cores: {@link ForkJoinPool#commonPool()}) */
     public SizingSearch(ForkJoinPool pool) {
+        this(pool, MAX_CANDIDATES);
+    }
+
+    /**
+     * @param pool          the threads to use
+     * @param maxCandidates the most candidates one search takes, 1 to {@link #MAX_CANDIDATES}: a larger space is
+     *                      refused (400) with its size and how to narrow it
+     */
+    public SizingSearch(ForkJoinPool pool, long maxCandidates) {
+        if (maxCandidates < 1 || maxCandidates > MAX_CANDIDATES) {
+            throw new IllegalArgumentException("maxCandidates = " + maxCandidates + ": must be 1 to " + MAX_CANDIDATES);
+        }
         this.pool = pool;
+        this.maxCandidates = maxCandidates;
     }
 
     /**
@@ -66,6 +83,11 @@ public final class SizingSearch {
         List<String> notes = new ArrayList<>(p.limits().notes());
         notes.add("Iron, eddy-current and friction losses are not modelled yet: efficiencies are of the copper, "
                 + "cables and rectifier only");
+        if (designs.isEmpty() && near.isEmpty()) {
+            notes.add("No design meets every limit, and none misses by one limit alone: each candidate breaks two or "
+                    + "more (see counts.prunedByLimit and counts.rejectedByFullModel); relax the limits that removed "
+                    + "most, or widen what can be built");
+        }
         if (!best.proven()) {
             notes.add(String.format(Locale.ROOT, "The search stopped at maxFullEvaluations = %d with candidates "
                     + "left whose bound could still beat the designs returned; raise it for a proven ranking",
@@ -99,7 +121,7 @@ public final class SizingSearch {
     Prepared prepare(SizingRequest request, SizingProgress progress) {
         progress.update(SizingProgress.Stage.LAYOUTS, 0, 1);
         Layouts layouts = Layouts.of(request, pool);
-        SearchSpace space = new SearchSpace(request, layouts.layouts());
+        SearchSpace space = new SearchSpace(request, layouts.layouts(), maxCandidates);
         LoadConstants lc = LoadConstants.of(request.load(), request.winding().windingTempC());
         DriveModel drive = DriveModel.of(request, lc);
         LimitSet limits = LimitSet.of(request, drive, lc);

@@ -49,6 +49,8 @@ public final class ErrorMapping {
         routes.exception(EditNotAllowedException.class, (e, ctx) -> respond(ctx, problem("forbidden", 403, e.getMessage(), ctx)));
         routes.exception(DesignStoreUnavailableException.class, (e, ctx) -> respond(ctx.header("Retry-After", "5"),
                 problem("service-unavailable", 503, e.getMessage(), ctx)));
+        routes.exception(coilwright.service.SizingBusyException.class, (e, ctx) -> respond(ctx.header("Retry-After",
+                Integer.toString(e.retryAfterS())), problem("too-many-requests", 429, e.getMessage(), ctx)));
         routes.exception(HttpResponseException.class, (e, ctx) -> respond(ctx, fromStatus(e.getStatus(), ctx)));
         routes.exception(Exception.class, (e, ctx) -> unexpected(e, ctx));
         routes.error(404, ctx -> respondUnlessDone(ctx, 404));

@@ -20,6 +20,10 @@ public record Route(HandlerType method, String path, Handler handler) {
         return new Route(HandlerType.POST, path, handler);
     }
 
+    public static Route delete(String path, Handler handler) {
+        return new Route(HandlerType.DELETE, path, handler);
+    }
+
     /** True for JSON routes: errors there are problem+json, elsewhere an HTML error page. */
     public static boolean isApiPath(String path) {
         return path.startsWith("/api/") || path.equals("/health") || path.equals("/metrics");
