@@ -27,6 +27,7 @@ import coilwright.web.rewind.RewindPage;
 import coilwright.web.saved.SavedDesignApi;
 import coilwright.web.saved.SavedDesignPages;
 import coilwright.web.sizing.SizingApi;
+import coilwright.web.sizing.SizingPage;
 import coilwright.web.units.Units;
 import io.javalin.Javalin;
 import io.javalin.http.staticfiles.Location;
@@ -115,6 +116,7 @@ public final class App {
         RewindApi rewindApi = new RewindApi(services.rewind(), binder);
         SavedDesignApi savedApi = new SavedDesignApi(services.designs());
         SizingApi sizingApi = new SizingApi(services.sizing(), binder);
+        SizingPage sizing = new SizingPage(services.sizing(), binder);
         HomePage home = new HomePage(services.examples());
         DesignPage design = new DesignPage(services.evaluation(), services.examples());
         WindingPage winding = new WindingPage(services.evaluation());
@@ -166,6 +168,10 @@ public final class App {
                 Route.get("/rewind", rewind::show),
                 Route.post("/rewind", rewind::plan),
                 Route.post("/rewind/stator-options", rewind::statorOptions),
+                Route.get("/sizing", sizing::show),
+                Route.post("/sizing", sizing::size),
+                Route.get("/sizing/jobs/{jobId}", sizing::job),
+                Route.post("/sizing/jobs/{jobId}/cancel", sizing::cancel),
                 // pages: saved designs
                 Route.get("/saved/new", saved::newForm),
                 Route.post("/saved", saved::save),

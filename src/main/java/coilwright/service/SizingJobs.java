@@ -99,6 +99,14 @@ public final class SizingJobs implements AutoCloseable {
         }
     }
 
+    /** The request a job is answering, while the job is kept. */
+    public Optional<SizingRequest> requestOf(String id) {
+        synchronized (jobs) {
+            forgetExpired();
+            return Optional.ofNullable(jobs.get(id)).map(j -> j.request);
+        }
+    }
+
     /** Asks a running job to stop (it stops within one block of work); a finished job is left as it is. */
     public Optional<SizingJob> cancel(String id) {
         synchronized (jobs) {
@@ -131,7 +139,7 @@ public final class SizingJobs implements AutoCloseable {
                         + "this service runs at once; try again in a minute, or narrow the search so that it has at "
                         + "most " + settings.inlineMaxCandidates() + " candidates and is answered at once", 30);
             }
-            job = new Job(newId(), candidates);
+            job = new Job(newId(), request, candidates);
             jobs.put(job.id, job);
         }
         Job running = job;
@@ -195,6 +203,7 @@ public final class SizingJobs implements AutoCloseable {
     /** A job's state; written by its search thread and read under the lock of {@code jobs}. */
     private final class Job {
         final String id;
+        final SizingRequest request;
         final long candidates;
         volatile boolean cancelled;
         volatile SizingProgress.Stage stage = SizingProgress.Stage.LAYOUTS;
@@ -208,8 +217,9 @@ public final class SizingJobs implements AutoCloseable {
         String message;
         Instant finishedAt;
 
-        Job(String id, long candidates) {
+        Job(String id, SizingRequest request, long candidates) {
             this.id = id;
+            this.request = request;
             this.candidates = candidates;
         }
 

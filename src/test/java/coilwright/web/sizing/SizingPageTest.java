@@ -1,0 +1,136 @@
+package coilwright.web.sizing;
+
+import coilwright.web.Html;
+import coilwright.web.TestApp;
+import io.restassured.response.Response;
+import org.jsoup.nodes.Element;
+import org.junit.jupiter.api.BeforeEach;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.extension.RegisterExtension;
+
+import java.util.HashMap;
+import java.util.List;
+import java.util.Map;
+
+import static io.restassured.RestAssured.given;
+import static org.hamcrest.Matchers.startsWith;
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+/** The sizing page through the real app, parsed with jsoup. */
+class SizingPageTest {
+    @RegisterExtension
+    static final TestApp APP = new TestApp();
+
+    @BeforeEach
+    void pointRestAssured() {
+        APP.useRestAssured();
+    }
+
+    /** Near the worked example's space: one 390 mm disc, a 16 mm stator, 16 poles, 16 to 24 turns of AWG 13. */
+    private static Map<String, String> small() {
+        Map<String, String> form = new HashMap<>(SizingForm.defaults());
+        form.putAll(Map.of("minPoles", "16", "maxPoles", "16", "minTurns", "16", "maxTurns", "24",
+                "thickestAwg", "13", "thinnestAwg", "13"));
+        return form;
+    }
+
+    /** The page a search ends on: inline, or the job's page once it is done. */
+    private static Html sized(Map<String, String> form) throws InterruptedException {
+        Response r = given().redirects().follow(false).formParams(form).post("/sizing");
+        if (r.statusCode() == 200) {
+            return Html.of(r);
+        }
+        assertEquals(303, r.statusCode(), r.asString());
+        String job = r.header("Location");
+        for (int i = 0; i < 600; i++) {
+            Response page = given().get(job);
+            if (page.header("Refresh") == null) {
+                return Html.of(page);
+            }
+            Thread.sleep(500);
+        }
+        throw new AssertionError("the search did not finish");
+    }
+
+    @Test
+    void the_home_page_menu_leads_to_the_form_with_defaults_in_the_trade_s_units() {
+        Html home = Html.of(given().get("/").then().statusCode(200).extract().response());
+        assertFalse(home.all("nav a[href=/sizing]").isEmpty(), "the menu links to the sizing page");
+        Html page = Html.of(given().get("/sizing").then().statusCode(200).contentType(startsWith("text/html"))
+                .extract().response());
+        assertEquals("3", page.value("rotorDiameterM"));
+        assertEquals("m", page.unit("rotorDiameterM"));
+        assertEquals("L/s", page.unit("flowLps"));
+        assertEquals("24", page.value("batteryV"));
+        assertEquals("WIND", page.selected("driveType"));
+        assertTrue(page.all("script:not([src])").isEmpty(), "no inline script");
+        assertTrue(page.all("[style]").isEmpty(), "no inline style");
+        assertFalse(page.all("script[src=/static/js/sort-table.js]").isEmpty());
+        given().get("/static/js/sort-table.js").then().statusCode(200);
+    }
+
+    @Test
+    void a_search_shows_ranked_designs_each_ready_to_open_on_the_design_pages() throws InterruptedException {
+        Html page = sized(small());
+        List<Element> rows = page.all("#designs tbody tr.design");
+        assertFalse(rows.isEmpty());
+        assertTrue(rows.size() <= 10, "the page asks for the ten best");
+        for (int i = 0; i < rows.size(); i++) {
+            assertEquals(Integer.toString(i + 1), rows.get(i).attr("data-rank"), "best first");
+        }
+        Element first = rows.get(0);
+        String turns = first.select("td").get(2).text();
+        assertTrue(Integer.parseInt(turns) >= 16 && Integer.parseInt(turns) <= 24, turns);
+        assertTrue(List.of("star", "delta").contains(first.select("td").get(4).text()));
+        assertTrue(first.selectFirst("td.cut-in").text().matches("\\d+ rpm \\d\\.\\d m/s"), first.text());
+        assertTrue(Double.parseDouble(first.attr("data-cut-in")) > 0);
+        // the row carries the whole design to the design results (POST /design) and to the design form
+        Element open = first.selectFirst("form.open-design");
+        assertEquals("/design", open.attr("action"));
+        Map<String, String> fields = new HashMap<>();
+        open.select("input[type=hidden]").forEach(i -> fields.put(i.attr("name"), i.attr("value")));
+        assertEquals(turns, fields.get("alternator.turnsPerCoil"));
+        Html results = Html.of(given().formParams(fields).post("/design").then().statusCode(200).extract().response());
+        String cutIn = results.id("cut-in").selectFirst(".value").text();
+        assertEquals(first.selectFirst("td.cut-in span").text(), cutIn, "the design page finds the same cut-in");
+        assertTrue(first.selectFirst("a.edit-design").attr("href").startsWith("/design/new?"));
+        Html form = Html.of(given().get(first.selectFirst("a.edit-design").attr("href")).then().statusCode(200)
+                .extract().response());
+        assertEquals(turns, form.value("alternator.turnsPerCoil"));
+        assertFalse(page.all("#pareto svg").isEmpty(), "the Pareto chart is drawn");
+        assertTrue(page.id("counts").text().matches("\\d+ candidates in the space.*"), page.id("counts").text());
+    }
+
+    @Test
+    void a_requirement_nothing_meets_is_explained_by_its_nearest_miss() throws InterruptedException {
+        Map<String, String> form = small();
+        form.put("maxCurrentDensity", "2");
+        Html page = sized(form);
+        assertTrue(page.has("none-found"));
+        Element miss = page.all("#near-misses li").first();
+        assertEquals("currentDensity", miss.attr("data-limit"));
+        assertTrue(miss.text().startsWith("Nothing that stays within 2.0 A/mm^2"), miss.text());
+        assertTrue(miss.text().contains("the closest needs"), miss.text());
+    }
+
+    @Test
+    void bad_fields_come_back_beside_their_fields_in_the_form() {
+        Map<String, String> form = small();
+        form.put("rotorDiameterM", "-3");
+        form.put("batteryV", "25");
+        form.put("flowLps", "lots");
+        form.put("magnetWidthMm", "0.5");
+        Html page = Html.of(given().formParams(form).post("/sizing").then().statusCode(400)
+                .contentType(startsWith("text/html")).extract().response());
+        assertTrue(page.error("batteryV").contains("whole number of 2.0 V cells"), page.error("batteryV"));
+        assertEquals("25", page.value("batteryV"), "the input as typed");
+        form.put("batteryV", "24");
+        page = Html.of(given().formParams(form).post("/sizing").then().statusCode(400).extract().response());
+        assertTrue(page.error("rotorDiameterM").contains("drive.rotor.diameterM"), page.error("rotorDiameterM"));
+        assertTrue(page.error("magnetWidthMm").contains("build.magnets[0].widthM"), page.error("magnetWidthMm"));
+        assertTrue(page.error("magnetWidthMm").contains("0.002"), page.error("magnetWidthMm"));
+        assertEquals("", page.error("flowLps"), "hydro fields are not read for a wind drive");
+    }
+}
