@@ -1,0 +1,67 @@
+package coilwright.web.sizing;
+
+import coilwright.web.Browser;
+import coilwright.web.TestApp;
+import org.junit.jupiter.api.Tag;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.extension.RegisterExtension;
+import org.openqa.selenium.By;
+import org.openqa.selenium.WebElement;
+import org.openqa.selenium.chrome.ChromeDriver;
+import org.openqa.selenium.support.ui.WebDriverWait;
+
+import java.time.Duration;
+import java.util.List;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+/** An installer sizes an alternator in real headless Chromium and carries the best design to the design page. */
+@Tag("slow")
+class BrowserSizingTest {
+    @RegisterExtension
+    static final TestApp APP = new TestApp();
+
+    private static void type(ChromeDriver d, String field, String text) {
+        WebElement input = d.findElement(By.id(field));
+        input.clear();
+        input.sendKeys(text);
+    }
+
+    @Test
+    void an_installer_finds_designs_sorts_them_and_opens_the_first_on_the_design_page() {
+        try (Browser browser = Browser.open()) {
+            ChromeDriver d = browser.driver();
+            d.get(APP.url("/"));
+            d.findElement(By.linkText("Size an alternator")).click();
+            type(d, "rotorDiameterM", "3");
+            type(d, "batteryV", "24");
+            type(d, "minPoles", "16");
+            type(d, "maxPoles", "16");
+            type(d, "minTurns", "16");
+            type(d, "maxTurns", "24");
+            type(d, "thickestAwg", "13");
+            type(d, "thinnestAwg", "13");
+            d.findElement(By.cssSelector("#sizing-form button[type=submit]")).click();
+            // inline, or through the progress page that refreshes itself until the designs are ready
+            new WebDriverWait(d, Duration.ofMinutes(4)).until(x -> !x.findElements(By.id("designs")).isEmpty());
+            List<WebElement> rows = d.findElements(By.cssSelector("#designs tbody tr.design"));
+            assertFalse(rows.isEmpty());
+
+            d.findElement(By.cssSelector("#designs th[data-key=turns] button.sort")).click();
+            List<Integer> turns = d.findElements(By.cssSelector("#designs tbody tr.design")).stream()
+                    .map(r -> Integer.parseInt(r.getAttribute("data-turns"))).toList();
+            assertEquals(turns.stream().sorted().toList(), turns, "sorted by turns, fewest first");
+            d.findElement(By.cssSelector("#designs th[data-key=rank] button.sort")).click();
+            WebElement first = d.findElement(By.cssSelector("#designs tbody tr.design"));
+            assertEquals("1", first.getAttribute("data-rank"), "back to best first");
+
+            String tableCutIn = first.findElement(By.cssSelector("td.cut-in span")).getText();
+            first.findElement(By.cssSelector("form.open-design button")).click();
+            String cutIn = d.findElement(By.cssSelector("#cut-in .value")).getText();
+            assertTrue(cutIn.matches("\\d+ rpm"), cutIn);
+            assertEquals(tableCutIn, cutIn, "the design page finds the cut-in the sizing found");
+        }
+    }
+}
