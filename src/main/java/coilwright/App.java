@@ -155,6 +155,7 @@ public final class App {
                 Route.post("/api/v1/sizing", sizingApi::size),
                 Route.get("/api/v1/sizing/jobs/{jobId}", sizingApi::job),
                 Route.delete("/api/v1/sizing/jobs/{jobId}", sizingApi::cancel),
+                Route.get("/api/v1/sizing/jobs/{jobId}/events", sizingApi::events),
                 // pages: design, winding, matching, rewinding
                 Route.get("/", home::show),
                 Route.get("/design/new", design::newDesign),

@@ -25,6 +25,12 @@ public record SizingJob(String id, Status status, Optional<String> stage, long d
     /** Where a job is. */
     public enum Status { RUNNING, DONE, FAILED, CANCELLED }
 
+    /** The same view without the result (progress events stay small; the result is read with the job). */
+    public SizingJob withoutResult() {
+        return new SizingJob(id, status, stage, done, total, fraction, candidates, elapsedMs, Optional.empty(), message,
+                expiresInS);
+    }
+
     /** True once the job will change no more. */
     public boolean finished() {
         return status != Status.RUNNING;

@@ -7,16 +7,35 @@ import coilwright.sizing.SizingRequest;
 import coilwright.web.NotFoundException;
 import coilwright.web.RecordBinder;
 import io.javalin.http.Context;
+import io.javalin.http.sse.SseClient;
+import io.javalin.http.sse.SseHandler;
 
 import java.util.Locale;
+import java.util.concurrent.Executors;
+import java.util.concurrent.ScheduledExecutorService;
+import java.util.concurrent.ScheduledFuture;
+import java.util.concurrent.TimeUnit;
+import java.util.concurrent.atomic.AtomicInteger;
+import java.util.concurrent.atomic.AtomicReference;
 
 /**
  * Design from requirements over JSON: {@code POST /api/v1/sizing} answers a small search inline (200) and starts a
  * job for a large one, or when the client sends {@code Prefer: respond-async} (RFC 7240), answering 202 with the
- * job and its {@code Location}; {@code GET /api/v1/sizing/jobs/{jobId}} reads a job, {@code DELETE} cancels it.
+ * job and its {@code Location}; {@code GET /api/v1/sizing/jobs/{jobId}} reads a job, {@code DELETE} cancels it, and
+ * {@code GET /api/v1/sizing/jobs/{jobId}/events} sends its progress as server-sent events until it ends.
  */
 public final class SizingApi {
     public static final String JOBS = "/api/v1/sizing/jobs/";
+    /** Progress listeners at once (a soft cap); each is one open connection, served by one shared timer thread. */
+    static final int MAX_LISTENERS = 64;
+    private static final long EVENT_PERIOD_MS = 500;
+
+    private final ScheduledExecutorService ticks = Executors.newSingleThreadScheduledExecutor(r -> {
+        Thread t = new Thread(r, "coilwright-sizing-events");
+        t.setDaemon(true);
+        return t;
+    });
+    private final AtomicInteger listeners = new AtomicInteger();
 
     private final SizingJobs sizing;
     private final RecordBinder binder;
@@ -45,6 +64,49 @@ public final class SizingApi {
     /** {@code DELETE /api/v1/sizing/jobs/{jobId}}. */
     public void cancel(Context ctx) {
         ctx.json(sizing.cancel(ctx.pathParam("jobId")).orElseThrow(() -> unknown(ctx)));
+    }
+
+    /**
+     * {@code GET /api/v1/sizing/jobs/{jobId}/events}: a {@code progress} event (the job without its result) every
+     * half second while it runs, then one {@code end} event with its final status; the stream then closes.
+     */
+    public void events(Context ctx) throws Exception {
+        String id = ctx.pathParam("jobId");
+        sizing.find(id).orElseThrow(() -> unknown(ctx));
+        if (listeners.get() >= MAX_LISTENERS) {
+            throw new coilwright.service.SizingBusyException(MAX_LISTENERS + " clients are following searches, as many "
+                    + "as this service serves; read the job with GET " + JOBS + id + " instead", 5);
+        }
+        new SseHandler(client -> follow(client, id)).handle(ctx);
+    }
+
+    /** Counted here, not before: Javalin calls this only for a client that accepts an event stream. */
+    private void follow(SseClient client, String id) {
+        listeners.incrementAndGet();
+        client.keepAlive();
+        AtomicReference<ScheduledFuture<?>> task = new AtomicReference<>();
+        Runnable stop = () -> {
+            ScheduledFuture<?> t = task.getAndSet(null);
+            if (t != null) {
+                t.cancel(false);
+                listeners.decrementAndGet();
+            }
+        };
+        client.onClose(stop);
+        task.set(ticks.scheduleAtFixedRate(() -> {
+            SizingJob job = sizing.find(id).orElse(null);
+            if (client.terminated() || job == null) {
+                stop.run();
+                client.close();
+                return;
+            }
+            client.sendEvent("progress", job.withoutResult());
+            if (job.finished()) {
+                client.sendEvent("end", job.status().name());
+                stop.run();
+                client.close();
+            }
+        }, 0, EVENT_PERIOD_MS, TimeUnit.MILLISECONDS));
     }
 
     static boolean prefersAsync(Context ctx) {

@@ -115,6 +115,21 @@ class SizingApiTest {
     }
 
     @Test
+    void a_job_s_progress_streams_as_server_sent_events_until_it_ends() throws InterruptedException {
+        String id = post(SizingBodies.small(), "respond-async").then().statusCode(202).extract().path("id");
+        Response events = given().accept("text/event-stream").get(JOB + "/events", id);
+        events.then().statusCode(200).contentType(startsWith("text/event-stream"));
+        String stream = events.asString();
+        assertTrue(stream.contains("event: progress"), stream);
+        assertTrue(stream.contains("\"id\":\"" + id + "\""), stream);
+        assertTrue(stream.contains("event: end\ndata: DONE"), stream);
+        assertFalse(stream.contains("\"designs\""), "the result is read with the job, not streamed");
+        assertEquals("DONE", finished(id).getString("status"));
+        given().get(JOB + "/events", "0123456789abcdef0123456789abcdef").then().statusCode(404)
+                .contentType(startsWith("application/problem+json"));
+    }
+
+    @Test
     void an_unknown_job_is_404_problem_json() {
         Response r = given().get(JOB, "0123456789abcdef0123456789abcdef");
         OpenApiContract.assertMatches(r, JOB, "GET");
