@@ -104,6 +104,28 @@ class SizingPageTest {
     }
 
     @Test
+    void a_large_search_shows_a_refreshing_progress_page_that_can_stop_it() {
+        Map<String, String> form = new HashMap<>(SizingForm.defaults());
+        form.putAll(Map.of("discDiameterMm", "360, 390, 420", "coilThicknessMm", "13, 18", "minPoles", "12",
+                "maxPoles", "20", "minTurns", "10", "maxTurns", "120", "thinnestAwg", "20", "maxStrands", "3"));
+        Response started = given().redirects().follow(false).formParams(form).post("/sizing");
+        assertEquals(303, started.statusCode());
+        String job = started.header("Location");
+        assertTrue(job.matches("/sizing/jobs/[0-9a-f]{32}"), job);
+        Response progress = given().get(job);
+        assertEquals("2", progress.header("Refresh"), "refreshes itself without JavaScript");
+        Html page = Html.of(progress);
+        assertFalse(page.all("progress#search-progress").isEmpty());
+        assertTrue(page.id("progress").text().contains("863136 candidates"), page.id("progress").text());
+        String cancel = page.all("#progress form").first().attr("action");
+        given().redirects().follow(false).post(cancel).then().statusCode(303);
+        Html stopped = Html.of(given().get(job).then().statusCode(200).extract().response());
+        assertTrue(stopped.id("stopped").text().contains("cancelled by the client"), stopped.id("stopped").text());
+        given().get("/sizing/jobs/0123456789abcdef0123456789abcdef").then().statusCode(404)
+                .contentType(startsWith("text/html"));
+    }
+
+    @Test
     void a_requirement_nothing_meets_is_explained_by_its_nearest_miss() throws InterruptedException {
         Map<String, String> form = small();
         form.put("maxCurrentDensity", "2");
