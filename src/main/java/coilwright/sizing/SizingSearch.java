@@ -83,7 +83,10 @@ public final class SizingSearch {
         List<String> notes = new ArrayList<>(p.limits().notes());
         notes.add("Iron, eddy-current and friction losses are not modelled yet: efficiencies are of the copper, "
                 + "cables and rectifier only");
-        if (designs.isEmpty() && near.isEmpty()) {
+        if (p.space().size() == 0) {
+            notes.add("No layout could be built from these poles, sizes and magnets (see counts.layoutsRejected for "
+                    + "why each was set aside): widen the pole range, or choose magnets that suit the size");
+        } else if (designs.isEmpty() && near.isEmpty()) {
             notes.add("No design meets every limit, and none misses by one limit alone: each candidate breaks two or "
                     + "more (see counts.prunedByLimit and counts.rejectedByFullModel); relax the limits that removed "
                     + "most, or widen what can be built");

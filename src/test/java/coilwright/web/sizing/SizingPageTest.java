@@ -100,7 +100,8 @@ class SizingPageTest {
                 .extract().response());
         assertEquals(turns, form.value("alternator.turnsPerCoil"));
         assertFalse(page.all("#pareto svg").isEmpty(), "the Pareto chart is drawn");
-        assertTrue(page.id("counts").text().matches("\\d+ candidates in the space.*"), page.id("counts").text());
+        assertTrue(page.id("counts").text().matches("(?s)\\d+ layouts drafted, \\d+ searched.*\\d+ candidates in the space.*"),
+                page.id("counts").text());
     }
 
     @Test
@@ -135,6 +136,16 @@ class SizingPageTest {
         assertEquals("currentDensity", miss.attr("data-limit"));
         assertTrue(miss.text().startsWith("Nothing that stays within 2.0 A/mm^2"), miss.text());
         assertTrue(miss.text().contains("the closest needs"), miss.text());
+    }
+
+    @Test
+    void magnets_that_suit_no_layout_are_said_to_be_the_reason() throws InterruptedException {
+        Map<String, String> form = small();
+        form.put("magnetWidthMm", "150");
+        Html page = sized(form);
+        assertTrue(page.has("none-found"));
+        assertTrue(page.id("layouts").text().contains("set aside: magnets do not fit"), page.id("layouts").text());
+        assertTrue(page.all("ul.notes li").stream().anyMatch(li -> li.text().startsWith("No layout could be built")));
     }
 
     @Test
