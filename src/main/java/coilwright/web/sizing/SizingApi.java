@@ -94,17 +94,22 @@ public final class SizingApi {
         };
         client.onClose(stop);
         task.set(ticks.scheduleAtFixedRate(() -> {
-            SizingJob job = sizing.find(id).orElse(null);
-            if (client.terminated() || job == null) {
+            try {
+                SizingJob job = sizing.find(id).orElse(null);
+                if (client.terminated() || job == null) {
+                    stop.run();
+                    client.close();
+                    return;
+                }
+                client.sendEvent("progress", job.withoutResult());
+                if (job.finished()) {
+                    client.sendEvent("end", job.status().name());
+                    stop.run();
+                    client.close();
+                }
+            } catch (RuntimeException gone) {
+                // the client went away mid-write: stop following (a throw would end the timer task silently)
                 stop.run();
-                client.close();
-                return;
-            }
-            client.sendEvent("progress", job.withoutResult());
-            if (job.finished()) {
-                client.sendEvent("end", job.status().name());
-                stop.run();
-                client.close();
             }
         }, 0, EVENT_PERIOD_MS, TimeUnit.MILLISECONDS));
     }

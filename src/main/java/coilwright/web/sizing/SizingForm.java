@@ -28,52 +28,55 @@ final class SizingForm {
     private static final Pattern LIST_SEPARATOR = Pattern.compile("[,;\\s]+");
     private static final JsonNodeFactory NODES = JsonNodeFactory.instance;
 
-    /** A form field: its request path, and the factor from the shown unit to SI. */
-    private record Field(String name, String path, double toSi) {
+    /**
+     * A form field: its request path, the factor from the shown unit to SI (0 for whole numbers, -1 for text) and
+     * the shown unit when it is not the request's own.
+     */
+    private record Field(String name, String path, double toSi, String shownUnit) {
     }
 
     private static final List<Field> WIND = List.of(
-            new Field("rotorDiameterM", "drive.rotor.diameterM", 1),
-            new Field("furlingRpm", "drive.rotor.maxRotorSpeedRpm", 1),
-            new Field("meanWindMs", "drive.wind.meanWindSpeedMs", 1),
-            new Field("ratedWindMs", "drive.ratedWindSpeedMs", 1),
-            new Field("cutInWindMs", "limits.maxCutInWindSpeedMs", 1));
+            new Field("rotorDiameterM", "drive.rotor.diameterM", 1, ""),
+            new Field("furlingRpm", "drive.rotor.maxRotorSpeedRpm", 1, ""),
+            new Field("meanWindMs", "drive.wind.meanWindSpeedMs", 1, ""),
+            new Field("ratedWindMs", "drive.ratedWindSpeedMs", 1, ""),
+            new Field("cutInWindMs", "limits.maxCutInWindSpeedMs", 1, ""));
     private static final List<Field> HYDRO = List.of(
-            new Field("headM", "drive.site.grossHeadM", 1),
-            new Field("flowLps", "drive.site.designFlowM3s", 1e-3),
-            new Field("penstockLengthM", "drive.penstock.lengthM", 1),
-            new Field("penstockDiameterMm", "drive.penstock.innerDiameterM", 1e-3),
-            new Field("runnerRpm", "drive.runner.targetSpeedRpm", 1),
-            new Field("driveRatio", "drive.driveRatio", 1));
+            new Field("headM", "drive.site.grossHeadM", 1, ""),
+            new Field("flowLps", "drive.site.designFlowM3s", 1e-3, "L/s"),
+            new Field("penstockLengthM", "drive.penstock.lengthM", 1, ""),
+            new Field("penstockDiameterMm", "drive.penstock.innerDiameterM", 1e-3, "mm"),
+            new Field("runnerRpm", "drive.runner.targetSpeedRpm", 1, ""),
+            new Field("driveRatio", "drive.driveRatio", 1, ""));
     private static final List<Field> AXIAL = List.of(
-            new Field("discDiameterMm", "build.discDiametersM", 1e-3),
-            new Field("coilThicknessMm", "build.coilLayerThicknessesM", 1e-3));
+            new Field("discDiameterMm", "build.discDiametersM", 1e-3, "mm"),
+            new Field("coilThicknessMm", "build.coilLayerThicknessesM", 1e-3, "mm"));
     private static final List<Field> RADIAL = List.of(
-            new Field("boreMm", "build.gapDiameterM", 1e-3),
-            new Field("stackMm", "build.stackLengthM", 1e-3),
-            new Field("slots", "build.slots", 0),
-            new Field("slotDepthMm", "build.stator.slotDepthM", 1e-3),
-            new Field("slotWidthMm", "build.stator.slotWidthM", 1e-3));
+            new Field("boreMm", "build.gapDiameterM", 1e-3, "mm"),
+            new Field("stackMm", "build.stackLengthM", 1e-3, "mm"),
+            new Field("slots", "build.slots", 0, ""),
+            new Field("slotDepthMm", "build.stator.slotDepthM", 1e-3, "mm"),
+            new Field("slotWidthMm", "build.stator.slotWidthM", 1e-3, "mm"));
     private static final List<Field> COMMON = List.of(
-            new Field("cableLengthM", "load.acCable.lengthM", 1),
-            new Field("cableAreaMm2", "load.acCable.conductorAreaM2", 1e-6),
-            new Field("minPoles", "build.minPoles", 0),
-            new Field("maxPoles", "build.maxPoles", 0),
-            new Field("magnetGrade", "build.magnets[0].gradeName", -1),
-            new Field("magnetWidthMm", "build.magnets[0].widthM", 1e-3),
-            new Field("magnetLengthMm", "build.magnets[0].lengthM", 1e-3),
-            new Field("magnetThicknessMm", "build.magnets[0].thicknessM", 1e-3),
-            new Field("minTurns", "winding.minTurnsPerCoil", 0),
-            new Field("maxTurns", "winding.maxTurnsPerCoil", 0),
-            new Field("thickestAwg", "winding.wire.thickestAwg", 0),
-            new Field("thinnestAwg", "winding.wire.thinnestAwg", 0),
-            new Field("maxStrands", "winding.wire.maxStrands", 0),
-            new Field("maxCurrentDensity", "limits.maxCurrentDensityAPerMm2", 1),
-            new Field("minEfficiencyPct", "limits.minEfficiency", 0.01),
-            new Field("maxOpenCircuitV", "limits.maxOpenCircuitLineRmsV", 1),
-            new Field("objective", "objective", -1),
-            new Field("copperPrice", "prices.copperPerKg", 1),
-            new Field("magnetPrice", "prices.rareEarthMagnetPerKg", 1));
+            new Field("cableLengthM", "load.acCable.lengthM", 1, ""),
+            new Field("cableAreaMm2", "load.acCable.conductorAreaM2", 1e-6, "mm²"),
+            new Field("minPoles", "build.minPoles", 0, ""),
+            new Field("maxPoles", "build.maxPoles", 0, ""),
+            new Field("magnetGrade", "build.magnets[0].gradeName", -1, ""),
+            new Field("magnetWidthMm", "build.magnets[0].widthM", 1e-3, "mm"),
+            new Field("magnetLengthMm", "build.magnets[0].lengthM", 1e-3, "mm"),
+            new Field("magnetThicknessMm", "build.magnets[0].thicknessM", 1e-3, "mm"),
+            new Field("minTurns", "winding.minTurnsPerCoil", 0, ""),
+            new Field("maxTurns", "winding.maxTurnsPerCoil", 0, ""),
+            new Field("thickestAwg", "winding.wire.thickestAwg", 0, ""),
+            new Field("thinnestAwg", "winding.wire.thinnestAwg", 0, ""),
+            new Field("maxStrands", "winding.wire.maxStrands", 0, ""),
+            new Field("maxCurrentDensity", "limits.maxCurrentDensityAPerMm2", 1, ""),
+            new Field("minEfficiencyPct", "limits.minEfficiency", 0.01, "%"),
+            new Field("maxOpenCircuitV", "limits.maxOpenCircuitLineRmsV", 1, ""),
+            new Field("objective", "objective", -1, ""),
+            new Field("copperPrice", "prices.copperPerKg", 1, ""),
+            new Field("magnetPrice", "prices.rareEarthMagnetPerKg", 1, ""));
 
     /**
      * The defaults: the worked example's 3 m rotor on a 5 m/s site charging 24 V, one disc and stator size, a space
@@ -151,7 +154,25 @@ final class SizingForm {
         if (!errors.isEmpty()) {
             throw new InvalidInputException(errors);
         }
-        return binder.bind(tree, SizingRequest.class);
+        try {
+            return binder.bind(tree, SizingRequest.class);
+        } catch (InvalidInputException e) {
+            throw new InvalidInputException(e.errors().stream().map(err -> asTyped(err, typed)).toList());
+        }
+    }
+
+    /** A message about a converted field starts with the value as the user typed it, in the form's unit. */
+    private static FieldError asTyped(FieldError e, Map<String, String> typed) {
+        String name = onForm(e.field());
+        for (List<Field> group : List.of(WIND, HYDRO, AXIAL, RADIAL, COMMON)) {
+            for (Field f : group) {
+                if (f.name().equals(name) && !f.shownUnit().isEmpty()) {
+                    return new FieldError(e.field(), e.value(), typed.getOrDefault(name, "") + " " + f.shownUnit()
+                            + " is out of range (the request in SI units: " + e.message() + ")", e.allowed());
+                }
+            }
+        }
+        return e;
     }
 
     /** The form field that shows a message about a request path; the path itself when no field shows it. */

@@ -162,6 +162,7 @@ class SizingPageTest {
         form.put("batteryV", "24");
         page = Html.of(given().formParams(form).post("/sizing").then().statusCode(400).extract().response());
         assertTrue(page.error("rotorDiameterM").contains("drive.rotor.diameterM"), page.error("rotorDiameterM"));
+        assertTrue(page.error("magnetWidthMm").startsWith("0.5 mm is out of range"), page.error("magnetWidthMm"));
         assertTrue(page.error("magnetWidthMm").contains("build.magnets[0].widthM"), page.error("magnetWidthMm"));
         assertTrue(page.error("magnetWidthMm").contains("0.002"), page.error("magnetWidthMm"));
         assertEquals("", page.error("flowLps"), "hydro fields are not read for a wind drive");
