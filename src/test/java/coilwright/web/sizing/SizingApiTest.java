@@ -85,6 +85,24 @@ class SizingApiTest {
     }
 
     @Test
+    void a_returned_design_evaluates_like_any_design_with_the_same_cut_in() throws Exception {
+        JsonPath r = sized(SizingBodies.small());
+        com.fasterxml.jackson.databind.ObjectMapper json = new com.fasterxml.jackson.databind.ObjectMapper();
+        ObjectNode body = json.createObjectNode();
+        body.set("alternator", json.valueToTree(r.getMap("designs[0].alternator")));
+        ObjectNode load = SizingBodies.small().get("load").deepCopy();
+        body.set("load", load.put("type", "BatteryLoad"));
+        body.putObject("speedRange").put("minRpm", 0).put("maxRpm", 500).put("points", 51);
+        body.put("ratedSpeedRpm", r.getDouble("designs[0].figures.ratedSpeedRpm"));
+        body.put("maxSpeedRpm", 500);
+        Response evaluated = given().contentType("application/json").body(body.toString()).post("/api/v1/evaluate");
+        evaluated.then().statusCode(200);
+        assertEquals(r.getDouble("designs[0].figures.cutInSpeedRpm"), evaluated.jsonPath().getDouble("cutInSpeedRpm"),
+                1e-6 * r.getDouble("designs[0].figures.cutInSpeedRpm"));
+        assertFalse(r.getList("designs[0].cautions").isEmpty(), "each design carries its cautions");
+    }
+
+    @Test
     void a_requested_job_reports_the_same_result_as_the_inline_answer() throws InterruptedException {
         Response started = post(SizingBodies.small(), "respond-async");
         OpenApiContract.assertMatches(started, PATH, "POST");
