@@ -1,16 +1,20 @@
 package coilwright.web.sizing;
 
+import coilwright.service.DesignDocument;
 import coilwright.sizing.DesignFigures;
 import coilwright.sizing.NearMiss;
 import coilwright.sizing.SizedDesign;
 import coilwright.sizing.SizingRequest;
 import coilwright.sizing.SizingResult;
 import coilwright.system.EvaluationRequest;
+import coilwright.web.Json;
 import coilwright.web.charts.ChartSpec;
 import coilwright.web.charts.Series;
 import coilwright.web.charts.SvgCharts;
 import coilwright.web.pages.DesignFormValues;
 import coilwright.web.units.Units;
+
+import com.fasterxml.jackson.core.JsonProcessingException;
 
 import java.net.URLEncoder;
 import java.nio.charset.StandardCharsets;
@@ -28,12 +32,13 @@ final class SizingView {
 
     /**
      * One ranked design as the table shows it; {@code sort} holds the raw number of each sortable column and
-     * {@code design} the design form's fields of this design (posted to the design results, or put in the form).
+     * {@code design} the design form's fields of this design (posted to the design results, or put in the form),
+     * {@code document} the design document to save it under a permanent link.
      */
     record Row(int rank, String layout, int coils, int poles, int turns, String wire, String connection,
                String cutIn, String cutInWind, String ratedPower, String efficiency, String currentDensity,
                String openCircuit, String mass, String cost, String energy, Map<String, String> sort,
-               Map<String, String> design, String editLink) {
+               Map<String, String> design, String editLink, String document) {
     }
 
     /** A near miss in words. */
@@ -85,7 +90,19 @@ final class SizingView {
                 String.format(Locale.ROOT, "%.2f kg", f.activeMassKg()),
                 String.format(Locale.ROOT, "%.0f", f.materialCost()),
                 f.annualEnergyKWh().isPresent() ? String.format(Locale.ROOT, "%.0f kWh", f.annualEnergyKWh().getAsDouble()) : "",
-                sort, fields, edit);
+                sort, fields, edit, document(d, design));
+    }
+
+    private static String document(SizedDesign d, EvaluationRequest design) {
+        String title = String.format(Locale.ROOT, "Sized design %d: %d coils / %d poles, %d turns of %s, %s", d.rank(),
+                d.alternator().winding().slots(), d.alternator().winding().poles(), d.alternator().turnsPerCoil(),
+                d.alternator().wire().label(), d.alternator().connection().name().toLowerCase(Locale.ROOT));
+        try {
+            return Json.mapper().writeValueAsString(new DesignDocument(DesignDocument.SCHEMA_VERSION, title,
+                    "From the sizing page: " + d.layout() + ".", design));
+        } catch (JsonProcessingException e) {
+            throw new IllegalStateException("a sized design could not be written as JSON", e);
+        }
     }
 
     private static String num(double v) {

@@ -99,6 +99,10 @@ class SizingPageTest {
         Html form = Html.of(given().get(first.selectFirst("a.edit-design").attr("href")).then().statusCode(200)
                 .extract().response());
         assertEquals(turns, form.value("alternator.turnsPerCoil"));
+        String document = first.selectFirst("form.save-design input[name=document]").attr("value");
+        Html saved = Html.of(given().formParam("document", document).post("/saved").then().statusCode(201)
+                .extract().response());
+        assertTrue(saved.text().contains("Sized design 1"), "saved under its title");
         assertFalse(page.all("#pareto svg").isEmpty(), "the Pareto chart is drawn");
         assertTrue(page.id("counts").text().matches("(?s)\\d+ layouts drafted, \\d+ searched.*\\d+ candidates in the space.*"),
                 page.id("counts").text());
