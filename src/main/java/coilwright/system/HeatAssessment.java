@@ -67,9 +67,7 @@ public final class HeatAssessment {
         ThermalClass insulation = alt.spec().insulationClass();
         double limit = insulation.limitC();
         double crossing = crossing(model, points, limit);
-        CoggingTorque cogging = alt.spec().rotor() instanceof RadialSurfaceRotor r
-                ? CoggingCalculator.radial(CoggingInput.of(r, alt.spec().winding(), alt.spec().magnetTempC()))
-                : CoggingCalculator.airCored();
+        CoggingTorque cogging = cogging(alt);
         double magnetC = Math.min(MAX_MAGNET_CHECK_C, Math.max(alt.spec().magnetTempC(), rated.magnetC()));
         String basis = String.format(Locale.ROOT, "The operating curve uses the winding temperature entered (%.0f C). "
                         + "The loss table solves it instead: at each speed the copper resistance follows the "
@@ -79,6 +77,13 @@ public final class HeatAssessment {
                 crossing > 0, crossing, model.friction(), cogging,
                 cogging.peakNm() + model.friction().breakawayTorqueNm(),
                 demagnetisation(alt, maxSpeedRpm, magnetC, rated.windingMeanC()));
+    }
+
+    /** Cogging at the magnet temperature entered; none for an air-cored stator. */
+    public static CoggingTorque cogging(Alternator alt) {
+        return alt.spec().rotor() instanceof RadialSurfaceRotor r
+                ? CoggingCalculator.radial(CoggingInput.of(r, alt.spec().winding(), alt.spec().magnetTempC()))
+                : CoggingCalculator.airCored();
     }
 
     /** The cautions the assessment calls for, most serious first. */

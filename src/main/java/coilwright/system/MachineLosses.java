@@ -72,7 +72,7 @@ public final class MachineLosses {
         this.alt = alt;
         this.load = load;
         this.ambientC = ambientC;
-        this.friction = ShaftFriction.ofBearings(List.of(assumedBearing(), assumedBearing()));
+        this.friction = assumedFriction();
         String bearings = "bearings: two sealed deep-groove ball bearings, " + fmt(ASSUMED_BEARING_BORE_M * 1000)
                 + " mm bore, " + fmt(ASSUMED_BEARING_LOAD_N) + " N each, seal drag " + fmt(ASSUMED_SEAL_DRAG_NM)
                 + " N m each (assumed)";
@@ -105,6 +105,11 @@ public final class MachineLosses {
             this.assumptions = List.of("air-cored coils cast in unfilled resin between the rotor discs, copper "
                     + fmt(100 * fill) + " % of the coil ring", bearings, air);
         }
+    }
+
+    /** Friction of the assumed bearings (see {@link #ASSUMED_BEARING_BORE_M}). */
+    public static ShaftFriction assumedFriction() {
+        return ShaftFriction.ofBearings(List.of(assumedBearing(), assumedBearing()));
     }
 
     private static Bearing assumedBearing() {

@@ -41,7 +41,7 @@ public final class Json {
     /** The sealed types of the core that travel as JSON; each variant is written with {@link #TYPE_PROPERTY}. */
     static final java.util.List<Class<?>> SEALED_TYPES = java.util.List.of(
             coilwright.magnet.RotorSpec.class, coilwright.machine.StatorSpec.class, coilwright.load.Load.class,
-            coilwright.turbine.PowerCoefficientCurve.class);
+            coilwright.turbine.PowerCoefficientCurve.class, coilwright.turbine.FurlingControl.class);
 
     private static final ObjectMapper MAPPER = create();
 
