@@ -34,7 +34,8 @@ class MachineLossesPropertiesTest {
         assertEquals(p.shaftPowerW(), p.powerToLoadW() + p.totalLossW(), 1e-6 * Math.max(1, p.shaftPowerW()),
                 "shaft power = output + every loss");
         assertTrue(p.windingMeanC() >= 25 - WindingTemperature.ACCURACY_K, "never below ambient: " + p);
-        assertTrue(p.windingHotSpotC() >= p.windingMeanC() - 1e-9 || !p.temperatureSettled());
+        assertTrue(p.windingHotSpotC() >= p.windingMeanC() - WindingTemperature.ACCURACY_K || !p.temperatureSettled(),
+                "the hot spot is at least the mean, within the fixed point's accuracy: " + p);
     }
 
     @Property(tries = 20)
