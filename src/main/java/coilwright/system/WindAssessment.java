@@ -100,6 +100,23 @@ public final class WindAssessment {
         return MachineLimitCautions.starting(s.startsTurningAtMs(), s.chargingStartsAtMs(), s.hardStartWindMs());
     }
 
+    /**
+     * The steady winding temperature and every loss at the matched point of greatest battery power (the top of the
+     * matched curve), in still air at the default ambient.
+     */
+    static LossPoint peakHeat(Alternator alt, coilwright.load.Load load, java.util.List<WindMatchPoint> points) {
+        double altRpm = points.stream().max(java.util.Comparator.comparingDouble(WindMatchPoint::powerToBatteryW))
+                .map(WindMatchPoint::alternatorSpeedRpm).orElse(0.0);
+        return new MachineLosses(alt, load, coilwright.thermal.CoolingConditions.DEFAULT_AMBIENT_C).steadyAt(altRpm);
+    }
+
+    /** A caution when the winding at the top of the matched curve is above or near its insulation class. */
+    static Optional<Caution> peakHeatCaution(Alternator alt, LossPoint peak) {
+        return MachineLimitCautions.windingTemperature(Math.min(peak.windingHotSpotC(), 1000),
+                alt.spec().insulationClass(), String.format(Locale.ROOT, "at the top of the matched curve (%.0f rpm)",
+                        peak.speedRpm()), false);
+    }
+
     /** Drivetrain efficiency as entered with the rotor; availability as given or the default. */
     static EnergyAssumptions energyAssumptions(WindMatchRequest req) {
         WindRotor rotor = req.rotor();

@@ -36,6 +36,8 @@ import java.util.OptionalDouble;
  * @param energyAssumptions            drivetrain efficiency and availability assumed, with the reason for each
  * @param deliveredAnnualEnergyKWh     annual energy to the battery after availability, kWh (annualEnergy is the
  *                                     IEC 61400-12-1 figure at 100 % availability)
+ * @param peakHeat                     steady winding temperature and every loss at the matched point of greatest
+ *                                     battery power
  */
 public record WindMatchResult(double airDensityKgM3, String airDensitySource, double optimumTipSpeedRatio, double maxCp,
                               double stallTipSpeedRatio, List<WindMatchPoint> points, OptionalDouble cutInWindSpeedMs,
@@ -44,7 +46,7 @@ public record WindMatchResult(double airDensityKgM3, String airDensitySource, do
                               String checkSpeedSource, double openCircuitLineRmsVAtCheckSpeed,
                               List<LoadCurvePoint> alternatorCurve, List<Caution> cautions, List<String> warnings,
                               String overSpeedControl, WindStart starting, EnergyAssumptions energyAssumptions,
-                              double deliveredAnnualEnergyKWh) {
+                              double deliveredAnnualEnergyKWh, LossPoint peakHeat) {
     public WindMatchResult {
         points = List.copyOf(points);
         alternatorCurve = List.copyOf(alternatorCurve);

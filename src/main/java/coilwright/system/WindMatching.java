@@ -84,6 +84,8 @@ public final class WindMatching {
                 maxBatteryW, maxDcA));
         WindStart starting = WindAssessment.starting(alt, rotor, rho, cutIn, distribution);
         WindAssessment.startingCaution(starting).ifPresent(cautions::add);
+        LossPoint peakHeat = WindAssessment.peakHeat(alt, req.load(), points);
+        WindAssessment.peakHeatCaution(alt, peakHeat).ifPresent(cautions::add);
         cautions.sort(java.util.Comparator.comparing(Caution::severity));
         EnergyAssumptions assumed = WindAssessment.energyAssumptions(req);
 
@@ -98,7 +100,7 @@ public final class WindMatching {
                 SmallWindClass.classFor(req.wind().meanWindSpeedMs()), checkAltRpm, source,
                 curve.openCircuitLineRmsV(checkAltRpm), matcher.loadCurve(topRotorRpm), cautions,
                 warnings(alt, points, energy), WindAssessment.describe(control), starting, assumed,
-                assumed.deliveredKWh(energy.annualEnergyKWh()));
+                assumed.deliveredKWh(energy.annualEnergyKWh()), peakHeat);
     }
 
     private static AnnualEnergyResult annual(List<WindMatchPoint> points, ToDoubleFunction<WindMatchPoint> power,

@@ -97,4 +97,15 @@ class WindAssessmentTest {
         WindStart s = WindMatching.match(r).starting();
         assertEquals(1 - WindAssessment.HARD_START_EXCEEDANCE, r.wind().distribution().cdf(s.hardStartWindMs()), 1e-4);
     }
+
+    @Test
+    void the_winding_temperature_is_solved_at_the_top_of_the_matched_curve() {
+        WindMatchResult r = WindMatching.match(MatchFixtures.windRequest(MatchFixtures.rotor()));
+        WindMatchPoint top = r.points().stream()
+                .max(java.util.Comparator.comparingDouble(WindMatchPoint::powerToBatteryW)).orElseThrow();
+        LossPoint heat = r.peakHeat();
+        assertEquals(top.alternatorSpeedRpm(), heat.speedRpm(), 1e-12);
+        assertTrue(heat.windingMeanC() > 25, "a charging winding is above ambient");
+        assertEquals(heat.shaftPowerW(), heat.powerToLoadW() + heat.totalLossW(), 1e-6 * heat.shaftPowerW());
+    }
 }
