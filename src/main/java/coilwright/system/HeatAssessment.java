@@ -52,16 +52,18 @@ public final class HeatAssessment {
     public static HeatAndLosses assess(Alternator alt, Load load, List<Double> speedsRpm, double ratedRpm,
                                        double maxSpeedRpm) {
         MachineLosses model = new MachineLosses(alt, load, CoolingConditions.DEFAULT_AMBIENT_C);
+        double top = MachineLosses.maxSpeedRpm(alt);
+        List<Double> inRange = speedsRpm.stream().filter(s -> s <= top).toList();
         List<LossPoint> points = new ArrayList<>();
-        int n = speedsRpm.size();
+        int n = inRange.size();
         int stride = Math.max(1, (int) Math.ceil((n - 1) / (double) (MAX_POINTS - 1)));
         for (int i = 0; i < n; i += stride) {
-            points.add(model.steadyAt(speedsRpm.get(i)));
+            points.add(model.steadyAt(inRange.get(i)));
         }
         if (n > 0 && (n - 1) % stride != 0) {
-            points.add(model.steadyAt(speedsRpm.get(n - 1)));
+            points.add(model.steadyAt(inRange.get(n - 1)));
         }
-        LossPoint rated = model.steadyAt(ratedRpm);
+        LossPoint rated = model.steadyAt(Math.min(ratedRpm, top));
         LossPoint hottest = points.stream().max(Comparator.comparingDouble(LossPoint::windingHotSpotC))
                 .filter(p -> p.windingHotSpotC() > rated.windingHotSpotC()).orElse(rated);
         ThermalClass insulation = alt.spec().insulationClass();
@@ -72,7 +74,10 @@ public final class HeatAssessment {
         String basis = String.format(Locale.ROOT, "The operating curve uses the winding temperature entered (%.0f C). "
                         + "The loss table solves it instead: at each speed the copper resistance follows the "
                         + "temperature its own losses heat it to, in still air at %.0f C.",
-                alt.spec().windingTempC(), model.ambientC());
+                alt.spec().windingTempC(), model.ambientC())
+                + (n < speedsRpm.size() || ratedRpm > top ? String.format(Locale.ROOT, " Speeds above %.0f rpm are "
+                + "beyond the thermal and iron-loss models and are left out (the rated figures are at %.0f rpm).", top,
+                Math.min(ratedRpm, top)) : "");
         return new HeatAndLosses(basis, model.ambientC(), model.assumptions(), points, rated, hottest, limit,
                 crossing > 0, crossing, model.friction(), cogging,
                 cogging.peakNm() + model.friction().breakawayTorqueNm(),

@@ -53,6 +53,8 @@ public final class MachineLosses {
     /** Yoke flux density the stator back iron is assumed sized for when its depth is not given, T (common practice). */
     static final double ASSUMED_YOKE_FLUX_DENSITY_T = 1.4;
     private static final double EDDY_REFERENCE_C = 20.0;
+    /** Highest speed of {@link CoolingConditions}, rpm. */
+    private static final double MAX_THERMAL_RPM = 20_000;
 
     private final Alternator alt;
     private final Load load;
@@ -115,6 +117,14 @@ public final class MachineLosses {
     private static Bearing assumedBearing() {
         return new Bearing(BearingType.DEEP_GROOVE_BALL, ASSUMED_BEARING_BORE_M, ASSUMED_BEARING_LOAD_N,
                 ASSUMED_SEAL_DRAG_NM);
+    }
+
+    /**
+     * Highest speed the models here are used at, rpm: the thermal networks' 20 000 rpm and the iron-loss separation's
+     * {@link IronLoss#MAX_FREQUENCY_HZ}.
+     */
+    public static double maxSpeedRpm(Alternator alt) {
+        return Math.min(MAX_THERMAL_RPM, IronLoss.MAX_FREQUENCY_HZ * 60 / alt.polePairs());
     }
 
     /** What was assumed because the design does not state it. */

@@ -107,7 +107,8 @@ public final class WindAssessment {
     static LossPoint peakHeat(Alternator alt, coilwright.load.Load load, java.util.List<WindMatchPoint> points) {
         double altRpm = points.stream().max(java.util.Comparator.comparingDouble(WindMatchPoint::powerToBatteryW))
                 .map(WindMatchPoint::alternatorSpeedRpm).orElse(0.0);
-        return new MachineLosses(alt, load, coilwright.thermal.CoolingConditions.DEFAULT_AMBIENT_C).steadyAt(altRpm);
+        return new MachineLosses(alt, load, coilwright.thermal.CoolingConditions.DEFAULT_AMBIENT_C)
+                .steadyAt(Math.min(altRpm, MachineLosses.maxSpeedRpm(alt)));
     }
 
     /** A caution when the winding at the top of the matched curve is above or near its insulation class. */

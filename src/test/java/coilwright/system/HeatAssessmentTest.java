@@ -174,4 +174,16 @@ class HeatAssessmentTest {
                 || h.demagnetisation().magnetTempC() == Math.max(entered, h.rated().magnetC()));
         assertFalse(h.assumptions().isEmpty());
     }
+
+    @Test
+    void speeds_beyond_the_thermal_models_are_left_out_of_the_table_and_said_so() {
+        EvaluationRequest r = new EvaluationRequest(SampleDesigns.axial24V(),
+                new coilwright.load.ResistiveLoad(50, Cable.NONE), new SpeedRange(0, 30_000, 7), 25_000, 30_000);
+        HeatAndLosses h = AlternatorEvaluator.evaluate(r).heatAndLosses();
+        double top = MachineLosses.maxSpeedRpm(AlternatorEvaluator.evaluate(r).alternator());
+        assertEquals(20_000, top, "16 poles: the thermal networks' limit comes first");
+        assertTrue(h.points().stream().allMatch(p -> p.speedRpm() <= top));
+        assertEquals(top, h.rated().speedRpm());
+        assertTrue(h.temperatureBasis().contains("beyond the thermal and iron-loss models"), h.temperatureBasis());
+    }
 }
