@@ -26,7 +26,8 @@ import java.util.Locale;
 /**
  * Post-processing of an evaluated speed range with the machine models: the steady winding temperature and loss
  * breakdown at speeds across the range and at the rated speed ({@link MachineLosses}), where the insulation class
- * limit is reached (Brent's method between the table's speeds), cogging ({@link CoggingCalculator}), the short-circuit demagnetisation
+ * limit is reached (Brent's method between the table's speeds), cogging ({@link CoggingCalculator}), the
+ * short-circuit demagnetisation
  * check ({@link DemagnetisationCheck}) and the cautions they call for ({@link MachineLimitCautions}).
  */
 public final class HeatAssessment {
@@ -95,8 +96,8 @@ public final class HeatAssessment {
     public static List<Caution> cautions(Alternator alt, HeatAndLosses h) {
         List<Caution> out = new ArrayList<>();
         MachineLimitCautions.demagnetisation(h.demagnetisation()).ifPresent(out::add);
-        MachineLimitCautions.windingTemperature(Math.min(h.rated().windingHotSpotC(), 1000), alt.spec().insulationClass(),
-                String.format(Locale.ROOT, "at the rated speed of %.0f rpm", h.rated().speedRpm()), false)
+        MachineLimitCautions.windingTemperature(Math.min(h.rated().windingHotSpotC(), 1000), alt.spec()
+                        .insulationClass(), String.format(Locale.ROOT, "at the rated speed of %.0f rpm", h.rated().speedRpm()), false)
                 .ifPresent(out::add);
         out.sort(Comparator.comparing(Caution::severity));
         return out;

@@ -88,7 +88,8 @@ public final class MachineLosses {
                     : Enclosure.OPEN_VENTILATED;
             this.thermal = SlottedStatorThermal.of(r, s, alt.spec().winding().slots(), alt.meanTurnLengthM(),
                     core.yokeThicknessM(), enclosure, clamp(alt.fill().copperFill(), 0.05, 0.8));
-            this.assumptions = List.of("slotted stator in a housing, " + enclosure.name().toLowerCase().replace('_', ' ')
+            String housing = enclosure.name().toLowerCase(java.util.Locale.ROOT).replace('_', ' ');
+            this.assumptions = List.of("slotted stator in a housing, " + housing
                             + (enclosure == Enclosure.OPEN_VENTILATED && alt.spec().cooling() != Cooling.OPEN_VENTILATED
                             ? " (no fan or liquid cooling is modelled: errs hot)" : ""),
                     "laminations: " + ElectricalSteels.UNKNOWN_MOTOR_LAMINATION + " (conservative), build factor "

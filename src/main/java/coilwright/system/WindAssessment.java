@@ -127,7 +127,8 @@ public final class WindAssessment {
                 + "stage loses 2 to 7 % (common practice)"
                 : "entered with the rotor; " + defaults.drivetrainBasis();
         return req.availability().isPresent()
-                ? new EnergyAssumptions(rotor.drivetrainEfficiency(), drive, req.availability().getAsDouble(), "entered")
+                ? new EnergyAssumptions(rotor.drivetrainEfficiency(), drive, req.availability().getAsDouble(),
+                "entered")
                 : new EnergyAssumptions(rotor.drivetrainEfficiency(), drive, defaults.availability(),
                 defaults.availabilityBasis());
     }

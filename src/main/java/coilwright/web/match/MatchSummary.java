@@ -17,7 +17,8 @@ final class MatchSummary {
                 Figure.of("air-density", "Air density", f("%.3f kg/m³", r.airDensityKgM3()), r.airDensitySource()),
                 Figure.of("cut-in", "Charging starts at", r.cutInWindSpeedMs().isPresent()
                         ? f("%.1f m/s", r.cutInWindSpeedMs().getAsDouble()) : "never", "wind speed"),
-                Figure.of("starts-turning", "Starts turning from rest at", f("%.1f m/s", r.starting().startsTurningAtMs()),
+                Figure.of("starts-turning", "Starts turning from rest at",
+                        f("%.1f m/s", r.starting().startsTurningAtMs()),
                         f("against %.2f N·m of cogging and bearing friction", r.starting().coggingPeakNm()
                                 + r.starting().breakawayFrictionNm())),
                 Figure.of("annual-energy", "Annual energy to the battery", f("%.0f kWh", energy.annualEnergyKWh()),

@@ -84,14 +84,16 @@ record HeatView(String basis, List<Figure> figures, List<String> headings, List<
         String limit = fmt.temp(h.insulationLimitC());
         return List.of(
                 new Figure("heat-rated-temperature", "Winding at rated speed", (r.temperatureSettled() ? "" : "> ")
-                        + fmt.temp(r.windingMeanC()), "hot spot " + fmt.temp(r.windingHotSpotC()) + ", insulation limit "
-                        + limit, hot ? "bad" : "ok"),
+                        + fmt.temp(r.windingMeanC()), "hot spot " + fmt.temp(r.windingHotSpotC())
+                        + ", insulation limit " + limit, hot ? "bad" : "ok"),
                 Figure.of("heat-limit-speed", "Insulation limit reached at", h.insulationLimitReached()
                         ? fmt.sig(h.insulationLimitSpeedRpm(), 3) + " rpm" : "not in the range",
                         "speed where the hot spot reaches " + limit),
-                Figure.of("heat-efficiency", "Efficiency at rated speed, every loss counted", fmt.percent(r.efficiency()),
+                Figure.of("heat-efficiency", "Efficiency at rated speed, every loss counted",
+                        fmt.percent(r.efficiency()),
                         "shaft " + fmt.sig(r.shaftPowerW(), 3) + " W, losses " + fmt.sig(r.totalLossW(), 3) + " W"),
-                Figure.of("heat-cogging", "Cogging torque, peak to peak", fmt.shown(Shown.NEWTON_METRE, c.peakToPeakNm(), 3),
+                Figure.of("heat-cogging", "Cogging torque, peak to peak",
+                        fmt.shown(Shown.NEWTON_METRE, c.peakToPeakNm(), 3),
                         c.cyclesPerRevolution() > 0 ? c.cyclesPerRevolution() + " cycles per revolution" : c.note()),
                 Figure.of("heat-starting-torque", "Torque to start from rest", fmt.shown(Shown.NEWTON_METRE,
                         h.startingTorqueNm(), 3), "peak cogging plus bearing break-away friction"),
