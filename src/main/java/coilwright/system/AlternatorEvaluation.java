@@ -21,6 +21,8 @@ import java.util.Optional;
  * @param maxSpeedRpm                 the speed it is checked at
  * @param cautions                    safety cautions, most serious first
  * @param warnings                    design warnings (fill, temperatures, measured constants)
+ * @param heatAndLosses               solved winding temperatures, the full loss breakdown, cogging and the
+ *                                    demagnetisation margin
  */
 public record AlternatorEvaluation(
         Alternator alternator,
@@ -32,7 +34,8 @@ public record AlternatorEvaluation(
         double openCircuitLineRmsVAtMaxSpeed,
         double maxSpeedRpm,
         List<Caution> cautions,
-        List<String> warnings) {
+        List<String> warnings,
+        HeatAndLosses heatAndLosses) {
 
     public AlternatorEvaluation {
         points = List.copyOf(points);

@@ -78,8 +78,13 @@ public final class AlternatorEvaluator {
         SafetyInputs safety = safetyInputs(alt, load, vocMax, maxSpeed, req.maxSpeedRpm() > 0
                         ? "the maximum speed given" : "twice the rated speed, as no maximum was given",
                 Math.max(maxOutput, rated.powerToLoadW()), Math.max(maxDc, rated.dcCurrentA()));
+        HeatAndLosses heat = HeatAssessment.assess(alt, load, points.stream().map(SpeedPoint::speedRpm).toList(),
+                req.effectiveRatedSpeedRpm(), maxSpeed);
+        List<coilwright.safety.Caution> cautions = new ArrayList<>(Cautions.assess(safety));
+        cautions.addAll(HeatAssessment.cautions(alt, heat));
+        cautions.sort(java.util.Comparator.comparing(coilwright.safety.Caution::severity));
         return new AlternatorEvaluation(alt, cutIn, cutInSolved, points, rated, density, vocMax, maxSpeed,
-                Cautions.assess(safety), warnings);
+                cautions, warnings, heat);
     }
 
     /** One operating point at a shaft speed. */

@@ -2,6 +2,7 @@ package coilwright.system;
 
 import coilwright.safety.Caution;
 import coilwright.turbine.AnnualEnergyResult;
+import coilwright.turbine.EnergyAssumptions;
 import coilwright.turbine.WindClassAssessment;
 
 import java.util.List;
@@ -30,13 +31,22 @@ import java.util.OptionalDouble;
  * @param alternatorCurve              the alternator's demand referred to the rotor shaft, for the matching chart
  * @param cautions                     safety cautions, most serious first
  * @param warnings                     matching advice
+ * @param overSpeedControl             the furling or power-limit control applied, in words
+ * @param starting                     starting from rest against cogging and bearing friction
+ * @param energyAssumptions            drivetrain efficiency and availability assumed, with the reason for each
+ * @param deliveredAnnualEnergyKWh     annual energy to the battery after availability, kWh (annualEnergy is the
+ *                                     IEC 61400-12-1 figure at 100 % availability)
+ * @param peakHeat                     steady winding temperature and every loss at the matched point of greatest
+ *                                     battery power
  */
 public record WindMatchResult(double airDensityKgM3, String airDensitySource, double optimumTipSpeedRatio, double maxCp,
                               double stallTipSpeedRatio, List<WindMatchPoint> points, OptionalDouble cutInWindSpeedMs,
                               AnnualEnergyResult annualEnergy, double idealAnnualEnergyKWh, double matchingPercent,
                               double rotorCapturePercent, WindClassAssessment windClass, double checkSpeedRpm,
                               String checkSpeedSource, double openCircuitLineRmsVAtCheckSpeed,
-                              List<LoadCurvePoint> alternatorCurve, List<Caution> cautions, List<String> warnings) {
+                              List<LoadCurvePoint> alternatorCurve, List<Caution> cautions, List<String> warnings,
+                              String overSpeedControl, WindStart starting, EnergyAssumptions energyAssumptions,
+                              double deliveredAnnualEnergyKWh, LossPoint peakHeat) {
     public WindMatchResult {
         points = List.copyOf(points);
         alternatorCurve = List.copyOf(alternatorCurve);

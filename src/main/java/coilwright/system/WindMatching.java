@@ -5,6 +5,8 @@ import coilwright.machine.AlternatorModel;
 import coilwright.safety.Caution;
 import coilwright.turbine.AnnualEnergy;
 import coilwright.turbine.AnnualEnergyResult;
+import coilwright.turbine.EnergyAssumptions;
+import coilwright.turbine.FurlingControl;
 import coilwright.turbine.SmallWindClass;
 import coilwright.turbine.WindDistribution;
 import coilwright.turbine.WindRotor;
@@ -48,8 +50,9 @@ public final class WindMatching {
         AlternatorCurve curve = new AlternatorCurve(alt, req.load());
         WindMatcher matcher = new WindMatcher(curve, rotor, rho, req.maxWindSpeedMs());
         List<WindMatchPoint> points = new ArrayList<>();
+        FurlingControl control = WindAssessment.control(req);
         for (double v : req.windSpeedsMs()) {
-            points.add(matcher.at(v));
+            points.add(WindAssessment.at(matcher, control, v));
         }
         double maxBatteryW = points.stream().mapToDouble(WindMatchPoint::powerToBatteryW).max().orElse(0);
         if (maxBatteryW <= 0) {
@@ -77,7 +80,14 @@ public final class WindMatching {
                 : String.format(Locale.ROOT, "the rotor's free-spinning speed at %.1f m/s, as no maximum speed was given",
                 req.maxWindSpeedMs());
         double checkAltRpm = rotor.alternatorSpeedRpm(checkRotorRpm);
-        List<Caution> cautions = AlternatorEvaluator.cautionsAt(alt, req.load(), checkAltRpm, source, maxBatteryW, maxDcA);
+        List<Caution> cautions = new ArrayList<>(AlternatorEvaluator.cautionsAt(alt, req.load(), checkAltRpm, source,
+                maxBatteryW, maxDcA));
+        WindStart starting = WindAssessment.starting(alt, rotor, rho, cutIn, distribution);
+        WindAssessment.startingCaution(starting).ifPresent(cautions::add);
+        LossPoint peakHeat = WindAssessment.peakHeat(alt, req.load(), points);
+        WindAssessment.peakHeatCaution(alt, peakHeat).ifPresent(cautions::add);
+        cautions.sort(java.util.Comparator.comparing(Caution::severity));
+        EnergyAssumptions assumed = WindAssessment.energyAssumptions(req);
 
         double topRotorRpm = 1.2 * points.stream().mapToDouble(WindMatchPoint::rotorSpeedRpm).max().orElse(1.0);
         return new WindMatchResult(rho, req.site().densityEntered() ? "entered"
@@ -89,7 +99,8 @@ public final class WindMatching {
                 idealRotorKWh > 0 ? 100.0 * rotorKWh / idealRotorKWh : 0.0,
                 SmallWindClass.classFor(req.wind().meanWindSpeedMs()), checkAltRpm, source,
                 curve.openCircuitLineRmsV(checkAltRpm), matcher.loadCurve(topRotorRpm), cautions,
-                warnings(alt, points, energy));
+                warnings(alt, points, energy), WindAssessment.describe(control), starting, assumed,
+                assumed.deliveredKWh(energy.annualEnergyKWh()), peakHeat);
     }
 
     private static AnnualEnergyResult annual(List<WindMatchPoint> points, ToDoubleFunction<WindMatchPoint> power,

@@ -106,7 +106,8 @@ public record DiscStatorThermal(double magnetInnerRadiusM, double magnetOuterRad
         double[] q = {heat.windingW() + heat.statorIronW(), 0, heat.rotorW() + heat.bearingW()};
         NetworkIteration.Result r = NetworkIteration.solve(3, t -> network(cc, t, kEq, gActive), q, cc.ambientC());
         double[] t = r.temperaturesC();
-        double hotSpot = t[0] + 0.5 * (t[0] - t[1]);
+        // heat made in the coil layer makes its middle hottest; heat reaching it from the faces (bearings) does not
+        double hotSpot = t[0] + 0.5 * Math.max(0, t[0] - t[1]);
         return new ThermalSolution(t[0], hotSpot, t[2], ThermalSolutions.nodes(r.network(), t), heat.totalW(),
                 r.network().heatToAmbientW(t, cc.ambientC()), cc.ambientC(), r.passes());
     }

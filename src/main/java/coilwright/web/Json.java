@@ -41,8 +41,8 @@ public final class Json {
     /** The sealed types of the core that travel as JSON; each variant is written with {@link #TYPE_PROPERTY}. */
     static final java.util.List<Class<?>> SEALED_TYPES = java.util.List.of(
             coilwright.magnet.RotorSpec.class, coilwright.machine.StatorSpec.class, coilwright.load.Load.class,
-            coilwright.turbine.PowerCoefficientCurve.class, coilwright.sizing.Drive.class,
-            coilwright.sizing.Build.class);
+            coilwright.turbine.PowerCoefficientCurve.class, coilwright.turbine.FurlingControl.class,
+            coilwright.sizing.Drive.class, coilwright.sizing.Build.class);
 
     private static final ObjectMapper MAPPER = create();
 

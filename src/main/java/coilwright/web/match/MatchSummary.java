@@ -17,8 +17,17 @@ final class MatchSummary {
                 Figure.of("air-density", "Air density", f("%.3f kg/m³", r.airDensityKgM3()), r.airDensitySource()),
                 Figure.of("cut-in", "Charging starts at", r.cutInWindSpeedMs().isPresent()
                         ? f("%.1f m/s", r.cutInWindSpeedMs().getAsDouble()) : "never", "wind speed"),
+                Figure.of("starts-turning", "Starts turning from rest at",
+                        f("%.1f m/s", r.starting().startsTurningAtMs()),
+                        f("against %.2f N·m of cogging and bearing friction", r.starting().coggingPeakNm()
+                                + r.starting().breakawayFrictionNm())),
                 Figure.of("annual-energy", "Annual energy to the battery", f("%.0f kWh", energy.annualEnergyKWh()),
                         f("%.2f kWh a day", energy.dailyEnergyKWh())),
+                Figure.of("peak-winding", "Winding at the top of the matched curve",
+                        f("%.0f °C", r.peakHeat().windingMeanC()), f("hot spot %.0f °C at %.0f rpm, still air at 25 °C",
+                                r.peakHeat().windingHotSpotC(), r.peakHeat().speedRpm())),
+                Figure.of("delivered-energy", "After availability", f("%.0f kWh", r.deliveredAnnualEnergyKWh()),
+                        f("available %.0f %% of the year", 100 * r.energyAssumptions().availability())),
                 Figure.of("capacity-factor", "Capacity factor", f("%.1f %%", 100 * energy.capacityFactor()),
                         f("of %.0f W", energy.ratedPowerW())),
                 Figure.of("matching", "Matching", f("%.0f %%", r.matchingPercent()),

@@ -32,6 +32,7 @@ final class ResultsModel {
         m.put("table", PointTable.of(e, units));
         m.put("winding", WindingView.of(e.alternator().winding()));
         m.put("machine", machine(e, units));
+        m.put("heat", HeatView.of(e, units));
         return m;
     }
 

@@ -26,7 +26,8 @@ final class Summary {
                 new Figure("rated-output", "Output at rated speed", fmt("%.0f W", rated.powerToLoadW()),
                         fmt("at %.0f rpm", rated.speedRpm()), ""),
                 new Figure("rated-efficiency", "Efficiency at rated speed", fmt("%.1f %%", 100 * rated.efficiency()),
-                        "power to load / shaft power (iron and friction losses not included)", ""),
+                        "electrical losses only, at the winding temperature entered; with every loss: see Heat and "
+                                + "losses", ""),
                 new Figure("hot-resistance", "Phase resistance, hot", fmt("%.3g Ω", e.alternator().phaseResistanceHotOhm()),
                         "at " + temp + fmt(" (%.3g Ω at 20 °C)", e.alternator().resistance().resistance20COhm()), ""),
                 new Figure("current-density", "Current density at rated speed", fmt("%.2f A/mm²", j.densityAPerMm2()),

@@ -85,6 +85,24 @@ class EvaluateApiTest {
     }
 
     @Test
+    void the_result_carries_the_solved_winding_temperature_and_a_balanced_loss_breakdown() {
+        Response r = post(PATH, Bodies.exampleDesign("rewound-motor-12v").json());
+        OpenApiContract.assertMatches(r, PATH, "POST");
+        JsonPath json = r.then().statusCode(200).extract().jsonPath();
+        Map<String, Object> rated = json.getMap("heatAndLosses.rated");
+        assertTrue(num(rated, "windingMeanC") > json.getDouble("heatAndLosses.ambientC"), "a loaded winding is warm");
+        double losses = 0;
+        for (String f : List.of("windingCopperLossW", "conductorEddyLossW", "deltaCirculationLossW", "statorIronLossW",
+                "bearingFrictionLossW", "windageLossW", "diodeLossW", "cableLossW", "batteryInternalLossW")) {
+            losses += num(rated, f);
+        }
+        assertEquals(num(rated, "shaftPowerW"), num(rated, "powerToLoadW") + losses, 1e-6 * num(rated, "shaftPowerW"));
+        assertTrue(num(rated, "deltaCirculationLossW") > 0, "the delta example counts its circulating current");
+        assertTrue(json.getDouble("heatAndLosses.cogging.peakNm") > 0, "a slotted stator cogs");
+        assertEquals(36, json.getInt("heatAndLosses.cogging.cyclesPerRevolution"), "LCM(36 slots, 12 poles)");
+    }
+
+    @Test
     void the_axial_example_warns_of_its_open_circuit_voltage_at_maximum_speed() {
         post(PATH, Bodies.exampleDesign(AXIAL).json()).then().statusCode(200)
                 .body("cautions.code", hasItem("OPEN_CIRCUIT_VOLTAGE"))

@@ -87,6 +87,31 @@ class MatchApiTest {
     }
 
     @Test
+    void tail_furling_and_availability_travel_with_the_request_and_are_shown_in_the_result() throws IOException {
+        ObjectNode b = windBody();
+        ((ObjectNode) b.get("rotor")).put("maxRotorSpeedRpm", 0);
+        b.putObject("furling").put("type", "TailFurling").put("furlStartMs", 11).put("fullyFurledMs", 16);
+        b.put("availability", 0.9);
+        Response r = post("/api/v1/match/wind", b);
+        r.then().statusCode(200)
+                .body("overSpeedControl", containsString("tail furling from 11.0 m/s"))
+                .body("energyAssumptions.availability", equalTo(0.9))
+                .body("starting.startsTurningAtMs", greaterThan(0.0))
+                .body("starting.coggingPeakNm", equalTo(0.0));
+        OpenApiContract.assertMatches(r, "/api/v1/match/wind", "POST");
+    }
+
+    @Test
+    void a_furling_control_out_of_order_is_a_400_naming_its_field() throws IOException {
+        ObjectNode b = windBody();
+        b.putObject("furling").put("type", "TailFurling").put("furlStartMs", 12).put("fullyFurledMs", 10);
+        b.put("availability", 1.5);
+        Response r = post("/api/v1/match/wind", b);
+        r.then().statusCode(400).body("errors.field", hasItems("furling.fullyFurledMs", "availability"));
+        OpenApiContract.assertMatches(r, "/api/v1/match/wind", "POST");
+    }
+
+    @Test
     void a_cp_table_travels_with_its_type_and_is_matched() throws IOException {
         ObjectNode b = windBody();
         ObjectNode curve = ((ObjectNode) b.get("rotor")).putObject("curve").put("type", "TableCp");

@@ -88,6 +88,7 @@ class MatchPagesTest {
         assertTrue(page.id("annual-energy").selectFirst(".value").text().endsWith("kWh"));
         assertTrue(page.all(".cautions-list .caution").eachText().stream()
                 .anyMatch(t -> t.contains("Open-circuit line voltage")), "the open-circuit voltage caution");
+        assertTrue(page.has("starts-turning") && page.has("delivered-energy"), "starting wind and delivered energy");
         assertEquals("2.6", page.value("rotor.diameterM"), "the form keeps what was entered");
     }
 

@@ -1,0 +1,19 @@
+package coilwright.system;
+
+/**
+ * Whether a wind rotor held still starts turning, and at what wind: its standstill torque against the alternator's
+ * peak cogging torque plus the break-away friction of the bearings ({@link coilwright.turbine.WindStarting}).
+ *
+ * @param startingTorqueCoefficient Cq0 of the rotor at standstill
+ * @param coefficientBasis          where Cq0 comes from, in words
+ * @param coggingPeakNm             peak cogging torque at the alternator shaft, N m (0 for air-cored stators)
+ * @param breakawayFrictionNm       break-away bearing friction at the alternator shaft, N m
+ * @param startsTurningAtMs         steady wind speed at which the rotor starts to turn from rest, m/s
+ * @param chargingStartsAtMs        wind speed at which charging begins once turning (the matched cut-in), m/s
+ * @param hardStartWindMs           wind speed exceeded only {@link WindAssessment#HARD_START_EXCEEDANCE} of the
+ *                                  time at the site: a rotor needing more rarely starts there, m/s
+ */
+public record WindStart(double startingTorqueCoefficient, String coefficientBasis, double coggingPeakNm,
+                        double breakawayFrictionNm, double startsTurningAtMs, double chargingStartsAtMs,
+                        double hardStartWindMs) {
+}
