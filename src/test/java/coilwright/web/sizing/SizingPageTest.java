@@ -104,6 +104,8 @@ class SizingPageTest {
                 .extract().response());
         assertTrue(saved.text().contains("Sized design 1"), "saved under its title");
         assertFalse(page.all("#pareto svg").isEmpty(), "the Pareto chart is drawn");
+        assertTrue(page.all("#limits li[data-limit=cutInWindSpeed]").text().contains("3.5 m/s"),
+                page.all("#limits li").text());
         assertTrue(page.id("counts").text().matches("(?s)\\d+ layouts drafted, \\d+ searched.*\\d+ candidates in the space.*"),
                 page.id("counts").text());
     }
