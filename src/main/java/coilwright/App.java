@@ -96,6 +96,7 @@ public final class App {
             });
             cfg.requestLogger.http(metrics::record);
             cfg.routes.before(SecurityHeaders::apply);
+            cfg.routes.before(RequestBodies::knownCharset);
             cfg.routes.before(Units::remember);
             cfg.routes.before("/api/*", OldNamesNotice::mark);
             ErrorMapping.register(cfg.routes, this::allowedMethods);

@@ -27,6 +27,23 @@ public final class RequestBodies {
         };
     }
 
+    /**
+     * A before-filter for every request: a {@code Content-Type} naming a charset this JVM does not know is a 415
+     * here, before anything reads the header through the container (which would throw).
+     */
+    public static void knownCharset(Context ctx) {
+        if (ctx.header("Content-Type") == null) {
+            return;
+        }
+        try {
+            ctx.req().getContentType();
+            ctx.req().getCharacterEncoding();
+        } catch (RuntimeException e) {
+            throw new RefusedRequestException(415, "unsupported-charset",
+                    "The charset named in the Content-Type is not one this service reads; send the body in UTF-8.");
+        }
+    }
+
     static void check(Context ctx, Route.Body accepts, long maxBodyBytes) {
         long declared = ctx.req().getContentLengthLong();
         if (declared > maxBodyBytes) {
