@@ -87,6 +87,8 @@ public final class App {
             cfg.jetty.multipartConfig.maxFileSize(config.maxBodyBytes(), io.javalin.config.SizeUnit.BYTES);
             cfg.jetty.modifyServer(server -> server.setErrorHandler(new LowLevelErrors()));
             cfg.http.prefer405over404 = true;
+            // gzip for HTML, JSON, SVG and CSV answers over 1500 bytes, when the client accepts it
+            cfg.http.compressionStrategy = io.javalin.compression.CompressionStrategy.GZIP;
             cfg.jsonMapper(new JacksonJsonMapper(Json.mapper()));
             cfg.fileRenderer(renderer);
             cfg.staticFiles.add(s -> {

@@ -68,6 +68,14 @@ class RequestBodiesTest {
     }
 
     @Test
+    void a_charset_the_server_does_not_know_is_a_415_not_a_500() {
+        given().contentType("application/json; charset=latin-1").body("{}".getBytes(StandardCharsets.UTF_8))
+                .post("/api/v1/evaluate").then().statusCode(415).body("type", equalTo("/problems/unsupported-charset"));
+        given().header("Content-Type", "application/json; charset=latin-1").get("/api/v1/examples")
+                .then().statusCode(415).contentType(startsWith("application/problem+json"));
+    }
+
+    @Test
     void a_405_names_the_allowed_methods() {
         given().delete("/api/v1/evaluate").then().statusCode(405).header("Allow", equalTo("POST"))
                 .contentType(startsWith("application/problem+json"));
