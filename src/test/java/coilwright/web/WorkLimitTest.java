@@ -63,6 +63,19 @@ class WorkLimitTest {
     }
 
     @Test
+    void an_admitted_request_runs_under_the_time_budget_and_the_budget_ends_with_it() throws Exception {
+        WorkLimit limit = new WorkLimit(1, 0, 1);
+        coilwright.validation.SolverFailedException e = assertThrows(coilwright.validation.SolverFailedException.class,
+                () -> limit.guard(ctx -> {
+                    Thread.sleep(5);
+                    coilwright.validation.TimeBudget.check("speedRange.points");
+                }).handle(null));
+        assertEquals("speedRange.points", e.field());
+        coilwright.validation.TimeBudget.check("x"); // closed: no budget on this thread any more
+        assertEquals(0, limit.inFlight());
+    }
+
+    @Test
     void a_failing_handler_gives_its_permit_back() {
         WorkLimit limit = new WorkLimit(1, 0);
         assertThrows(IllegalStateException.class, () -> limit.guard(ctx -> {
