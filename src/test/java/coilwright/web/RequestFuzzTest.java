@@ -317,7 +317,7 @@ class RequestFuzzTest {
                     double v = o.get(name).asDouble();
                     double factor = pick(random, 0.0, 1e-200, Double.MIN_VALUE, 1e-12, 1e-6, 1e-3, 0.1,
                             0.5, 0.9, 0.99, 1.01, 1.1, 2.0, 10.0, 1e3, 1e6, 1e12, 1e200, -1.0);
-                    double next = v == 0 ? pick(random, 1e-9, 1.0, 1e9, -1.0) : v * factor;
+                    double next = v == 0 ? pick(random, Double.MIN_VALUE, 1e-200, 1e-12, 1e-9, 1e-6, 1.0, 1e9, -1.0) : v * factor;
                     if (o.get(name).isIntegralNumber() && Math.abs(next) < 1e15) {
                         o.put(name, Math.round(next));
                     } else {
