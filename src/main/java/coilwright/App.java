@@ -9,6 +9,10 @@ import coilwright.web.ErrorMapping;
 import coilwright.web.FormBinder;
 import coilwright.web.HealthHandler;
 import coilwright.web.JacksonJsonMapper;
+import coilwright.web.LowLevelErrors;
+import coilwright.web.RequestBodies;
+import coilwright.web.SecurityHeaders;
+import coilwright.web.WorkLimit;
 import coilwright.web.Json;
 import coilwright.web.Metrics;
 import coilwright.web.OldNamesNotice;
@@ -73,13 +77,20 @@ public final class App {
                 .orElseGet(() -> Services.create(database, Json.mapper()));
         AtomicBoolean started = new AtomicBoolean(false);
         BooleanSupplier ready = started::get;
-        List<Route> table = new ArrayList<>(routeTable(ready, metrics, services));
+        WorkLimit work = new WorkLimit(config.maxBusy(), config.busyWaitMillis());
+        List<Route> table = new ArrayList<>(routeTable(ready, metrics, services, work));
         table.addAll(extraRoutes);
         this.routes = List.copyOf(table);
         this.javalin = Javalin.create(cfg -> {
             cfg.startup.showJavalinBanner = false;
             cfg.http.maxRequestSize = config.maxBodyBytes();
+            // multipart bodies are parsed by the container, not through maxRequestSize: the same limit for them
+            cfg.jetty.multipartConfig.maxTotalRequestSize(config.maxBodyBytes(), io.javalin.config.SizeUnit.BYTES);
+            cfg.jetty.multipartConfig.maxFileSize(config.maxBodyBytes(), io.javalin.config.SizeUnit.BYTES);
+            cfg.jetty.modifyServer(server -> server.setErrorHandler(new LowLevelErrors()));
             cfg.http.prefer405over404 = true;
+            // gzip for HTML, JSON, SVG and CSV answers over 1500 bytes, when the client accepts it
+            cfg.http.compressionStrategy = io.javalin.compression.CompressionStrategy.GZIP;
             cfg.jsonMapper(new JacksonJsonMapper(Json.mapper()));
             cfg.fileRenderer(renderer);
             cfg.staticFiles.add(s -> {
@@ -88,13 +99,26 @@ public final class App {
                 s.location = Location.CLASSPATH;
             });
             cfg.requestLogger.http(metrics::record);
+            cfg.routes.before(SecurityHeaders::apply);
+            cfg.routes.before(RequestBodies::knownCharset);
             cfg.routes.before(Units::remember);
             cfg.routes.before("/api/*", OldNamesNotice::mark);
-            ErrorMapping.register(cfg.routes);
-            routes.forEach(r -> cfg.routes.addHttpHandler(r.method(), r.path(), r.handler()));
+            ErrorMapping.register(cfg.routes, this::allowedMethods);
+            routes.forEach(r -> cfg.routes.addHttpHandler(r.method(), r.path(),
+                    RequestBodies.guard(r, config.maxBodyBytes())));
             cfg.events.serverStarted(() -> started.set(true));
             cfg.events.serverStopping(() -> started.set(false));
         });
+    }
+
+    /** The methods the routes on a path take (HEAD with GET), for the {@code Allow} of a 405. */
+    private List<String> allowedMethods(String path) {
+        List<String> methods = new ArrayList<>();
+        routes.stream().filter(r -> r.matches(path)).map(r -> r.method().name()).distinct().forEach(methods::add);
+        if (methods.contains("GET")) {
+            methods.add("HEAD");
+        }
+        return methods;
     }
 
     private static Database joinOpening(java.util.concurrent.CompletableFuture<Database> opening) {
@@ -108,8 +132,12 @@ public final class App {
         }
     }
 
-    /** Every route of the service: method, path and handler. Handlers are thin and live in {@code coilwright.web}. */
-    private static List<Route> routeTable(BooleanSupplier ready, Metrics metrics, Services services) {
+    /**
+     * Every route of the service: method, path and handler. Handlers are thin and live in {@code coilwright.web}.
+     * Handlers that compute (evaluate, lay out, match, rewind, save or recompute a design) run under {@code work}, the
+     * limit on expensive requests in flight.
+     */
+    private static List<Route> routeTable(BooleanSupplier ready, Metrics metrics, Services services, WorkLimit work) {
         RecordBinder binder = new RecordBinder(Json.mapper());
         EvaluationApi designApi = new EvaluationApi(services.evaluation(), services.examples(), binder, Json.mapper());
         MatchApi matchApi = new MatchApi(services.matching(), binder);
@@ -128,28 +156,28 @@ public final class App {
                 Route.get("/metrics", metrics),
                 Route.get("/api/v1/openapi.json", new OpenApiHandler()),
                 // JSON API: designs, windings, catalogues, examples
-                Route.post("/api/v1/evaluate", designApi::evaluate),
-                Route.post("/api/v1/winding", designApi::winding),
+                Route.post("/api/v1/evaluate", work.guard(designApi::evaluate)),
+                Route.post("/api/v1/winding", work.guard(designApi::winding)),
                 Route.get("/api/v1/catalogue", designApi::catalogue),
                 Route.get("/api/v1/examples", designApi::examples),
                 Route.get("/api/v1/examples/{slug}", designApi::example),
                 // JSON API: turbine matching and rewinding
-                Route.post("/api/v1/match/wind", matchApi::wind),
-                Route.post("/api/v1/match/hydro", matchApi::hydro),
-                Route.post("/api/v1/rewind", rewindApi::plan),
-                Route.post("/api/v1/rewind/stator-options", rewindApi::statorOptions),
+                Route.post("/api/v1/match/wind", work.guard(matchApi::wind)),
+                Route.post("/api/v1/match/hydro", work.guard(matchApi::hydro)),
+                Route.post("/api/v1/rewind", work.guard(rewindApi::plan)),
+                Route.post("/api/v1/rewind/stator-options", work.guard(rewindApi::statorOptions)),
                 // JSON API: saved designs
-                Route.post("/api/v1/designs", savedApi::create),
-                Route.post("/api/v1/designs/import", savedApi::importFile),
-                Route.post("/api/v1/designs/{designId}/revisions", savedApi::revise),
+                Route.post("/api/v1/designs", work.guard(savedApi::create)),
+                Route.post("/api/v1/designs/import", work.guard(savedApi::importFile)).withUploads(),
+                Route.post("/api/v1/designs/{designId}/revisions", work.guard(savedApi::revise)),
                 Route.get("/api/v1/designs/{designId}", savedApi::design),
                 Route.get("/api/v1/designs/{designId}/export", savedApi::exportDesign),
-                Route.get("/api/v1/designs/{designId}/curves.csv", savedApi::designCurves),
+                Route.get("/api/v1/designs/{designId}/curves.csv", work.guard(savedApi::designCurves)),
                 Route.get("/api/v1/revisions/{revisionId}", savedApi::revision),
                 Route.get("/api/v1/revisions/{revisionId}/export", savedApi::exportRevision),
-                Route.get("/api/v1/revisions/{revisionId}/curves.csv", savedApi::revisionCurves),
-                Route.get("/api/v1/revisions/{revisionId}/recomputed", savedApi::recomputed),
-                Route.get("/api/v1/compare", savedApi::compare),
+                Route.get("/api/v1/revisions/{revisionId}/curves.csv", work.guard(savedApi::revisionCurves)),
+                Route.get("/api/v1/revisions/{revisionId}/recomputed", work.guard(savedApi::recomputed)),
+                Route.get("/api/v1/compare", work.guard(savedApi::compare)),
                 Route.get("/api/v1/demos", savedApi::demos),
                 // JSON API: design from requirements
                 Route.post("/api/v1/sizing", sizingApi::size),
@@ -159,30 +187,30 @@ public final class App {
                 // pages: design, winding, matching, rewinding
                 Route.get("/", home::show),
                 Route.get("/design/new", design::newDesign),
-                Route.post("/design", design::submit),
-                Route.get("/design/results", design::exampleResults),
-                Route.get("/winding", winding::show),
+                Route.post("/design", work.guard(design::submit)),
+                Route.get("/design/results", work.guard(design::exampleResults)),
+                Route.get("/winding", work.guard(winding::show)),
                 Route.get("/match/wind", match::windForm),
-                Route.post("/match/wind", match::windResult),
+                Route.post("/match/wind", work.guard(match::windResult)),
                 Route.get("/match/hydro", match::hydroForm),
-                Route.post("/match/hydro", match::hydroResult),
+                Route.post("/match/hydro", work.guard(match::hydroResult)),
                 Route.get("/rewind", rewind::show),
-                Route.post("/rewind", rewind::plan),
-                Route.post("/rewind/stator-options", rewind::statorOptions),
+                Route.post("/rewind", work.guard(rewind::plan)),
+                Route.post("/rewind/stator-options", work.guard(rewind::statorOptions)),
                 Route.get("/sizing", sizing::show),
                 Route.post("/sizing", sizing::size),
                 Route.get("/sizing/jobs/{jobId}", sizing::job),
                 Route.post("/sizing/jobs/{jobId}/cancel", sizing::cancel),
                 // pages: saved designs
                 Route.get("/saved/new", saved::newForm),
-                Route.post("/saved", saved::save),
+                Route.post("/saved", work.guard(saved::save)).withUploads(),
                 Route.get("/d/{designId}", saved::latest),
                 Route.get("/d/{designId}/r/{revisionId}", saved::revision),
-                Route.get("/d/{designId}/r/{revisionId}/recomputed", saved::recomputed),
+                Route.get("/d/{designId}/r/{revisionId}/recomputed", work.guard(saved::recomputed)),
                 Route.get("/d/{designId}/r/{revisionId}/print", saved::print),
                 Route.get("/d/{designId}/revise", saved::reviseForm),
-                Route.post("/d/{designId}/revise", saved::revise),
-                Route.get("/compare", saved::compare),
+                Route.post("/d/{designId}/revise", work.guard(saved::revise)).withUploads(),
+                Route.get("/compare", work.guard(saved::compare)),
                 Route.get("/demos", saved::demos));
     }
 

@@ -4,6 +4,7 @@ import coilwright.load.Load;
 import coilwright.machine.Alternator;
 import coilwright.validation.Checks;
 
+import coilwright.validation.TimeBudget;
 import java.util.HashMap;
 import java.util.Map;
 
@@ -34,7 +35,10 @@ public final class AlternatorCurve {
      */
     public SpeedPoint at(double speedRpm) {
         new Checks().nonNegative("speedRpm", speedRpm).throwIfAny();
-        return solved.computeIfAbsent(speedRpm, n -> AlternatorEvaluator.point(alternator, load, n));
+        return solved.computeIfAbsent(speedRpm, n -> {
+            TimeBudget.check("");
+            return AlternatorEvaluator.point(alternator, load, n);
+        });
     }
 
     /**

@@ -17,6 +17,7 @@ import coilwright.magnet.MagnetMaterial;
 import coilwright.safety.Cautions;
 import coilwright.safety.SafetyInputs;
 
+import coilwright.validation.TimeBudget;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
@@ -53,6 +54,7 @@ public final class AlternatorEvaluator {
         LoadSolver.Sweep sweep = sweep(alt, load);
         List<SpeedPoint> points = new ArrayList<>(req.speedRange().points());
         for (int i = 0; i < req.speedRange().points(); i++) {
+            TimeBudget.check("speedRange.points");
             points.add(point(alt, sweep, req.speedRange().speedRpm(i)));
         }
         SpeedPoint rated = point(alt, sweep, req.effectiveRatedSpeedRpm());

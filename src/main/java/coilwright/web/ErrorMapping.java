@@ -15,6 +15,7 @@ import io.javalin.http.HttpStatus;
 import java.util.List;
 import java.util.Map;
 import java.util.UUID;
+import java.util.function.Function;
 import org.slf4j.Logger;
 import org.slf4j.LoggerFactory;
 
@@ -34,6 +35,14 @@ public final class ErrorMapping {
     }
 
     public static void register(RoutesConfig routes) {
+        register(routes, path -> List.of());
+    }
+
+    /**
+     * As {@link #register(RoutesConfig)}; {@code allowedMethods} names the methods a path takes, sent as {@code Allow}
+     * with every 405.
+     */
+    public static void register(RoutesConfig routes, Function<String, List<String>> allowedMethods) {
         routes.exception(InvalidInputException.class, (e, ctx) -> failed(ctx, 400, e.errors(),
                 problem("invalid-input", 400, e.errors().size() == 1 ? "1 field is invalid."
                         : e.errors().size() + " fields are invalid.", ctx).withErrors(e.errors())));
@@ -51,10 +60,22 @@ public final class ErrorMapping {
                 problem("service-unavailable", 503, e.getMessage(), ctx)));
         routes.exception(coilwright.service.SizingBusyException.class, (e, ctx) -> respond(ctx.header("Retry-After",
                 Integer.toString(e.retryAfterS())), problem("too-many-requests", 429, e.getMessage(), ctx)));
+        routes.exception(RefusedRequestException.class, (e, ctx) -> {
+            if (e.retryAfterSeconds() > 0) {
+                ctx.header("Retry-After", Integer.toString(e.retryAfterSeconds()));
+            }
+            respond(ctx, problem(e.slug(), e.status(), e.getMessage(), ctx));
+        });
         routes.exception(HttpResponseException.class, (e, ctx) -> respond(ctx, fromStatus(e.getStatus(), ctx)));
         routes.exception(Exception.class, (e, ctx) -> unexpected(e, ctx));
         routes.error(404, ctx -> respondUnlessDone(ctx, 404));
-        routes.error(405, ctx -> respondUnlessDone(ctx, 405));
+        routes.error(405, ctx -> {
+            List<String> allowed = allowedMethods.apply(ctx.path());
+            if (!allowed.isEmpty()) {
+                ctx.header("Allow", String.join(", ", allowed));
+            }
+            respondUnlessDone(ctx, 405);
+        });
     }
 
     private static void failed(Context ctx, int status, String field, String message, Problem problem) {
@@ -94,6 +115,7 @@ public final class ErrorMapping {
             case 404 -> "There is nothing at " + ctx.path() + ".";
             case 405 -> ctx.method().name() + " is not allowed on " + ctx.path() + ".";
             case 413 -> "The request body is larger than the limit of this service.";
+            case 415 -> "The request body is not of a media type this address takes.";
             default -> HttpStatus.forStatus(status).getMessage() + ".";
         };
         return problem(slug(status), status, detail, ctx);
@@ -112,9 +134,10 @@ public final class ErrorMapping {
         ctx.status(problem.status());
         if (Route.isApiPath(ctx.path())) {
             try {
-                ctx.contentType(Problem.MEDIA_TYPE).result(Json.mapper().writeValueAsString(problem));
+                // bytes, not a String: the body is UTF-8 whatever the container's default charset
+                ctx.contentType(Problem.MEDIA_TYPE + ";charset=utf-8").result(Json.mapper().writeValueAsBytes(problem));
             } catch (JsonProcessingException e) {
-                ctx.contentType("text/plain").result(problem.title());
+                ctx.contentType("text/plain;charset=utf-8").result(problem.title());
             }
             return;
         }

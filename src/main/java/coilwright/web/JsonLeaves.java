@@ -47,6 +47,7 @@ final class JsonLeaves {
         if (raw == OptionalLong.class) return wrap(bind(node, long.class, path, errors), v -> OptionalLong.of((Long) v));
         if (List.class == raw || Collection.class == raw) return list(node, arg(type), path, errors);
         if (raw.isSealed()) return variant(node, raw, path, errors);
+        if (raw.isArray() && node.isArray() && node.size() > MAX_LIST_ITEMS) return tooLong(node, path, errors);
         String expected = describe(type);
         boolean fits = raw.isRecord() ? node.isObject()
                 : isDecimal(raw) || isWhole(raw) ? node.isNumber()
@@ -103,9 +104,18 @@ final class JsonLeaves {
         return fail(typePath, typeNode, "must be " + allowed, allowed, errors);
     }
 
+    /**
+     * The most items any list of a request may hold (table rows, curve points, measurements): the work a request may
+     * ask for is bounded, and every example and realistic table is far shorter.
+     */
+    public static final int MAX_LIST_ITEMS = 200;
+
     private Object list(JsonNode node, Type element, String path, List<FieldError> errors) {
         if (!node.isArray()) {
             return fail(path, node, "must be a JSON array", "an array", errors);
+        }
+        if (node.size() > MAX_LIST_ITEMS) {
+            return tooLong(node, path, errors);
         }
         List<Object> out = new ArrayList<>();
         boolean ok = true;
@@ -117,9 +127,18 @@ final class JsonLeaves {
         return ok ? List.copyOf(out) : RecordBinder.FAILED;
     }
 
+    private static Object tooLong(JsonNode node, String path, List<FieldError> errors) {
+        String p = path.isEmpty() ? "body" : path;
+        errors.add(new FieldError(p, node.size() + " items", p + " has " + node.size() + " items: at most "
+                + MAX_LIST_ITEMS + " are allowed in any list", "at most " + MAX_LIST_ITEMS + " items"));
+        return RecordBinder.FAILED;
+    }
+
     private static Object fail(String path, JsonNode node, String why, String allowed, List<FieldError> errors) {
         String p = path.isEmpty() ? "body" : path;
-        errors.add(new FieldError(p, text(node), p + " = " + node + ": " + why, allowed));
+        String shown = node.toString();
+        shown = shown.length() > 80 ? shown.substring(0, 77) + "..." : shown;
+        errors.add(new FieldError(p, text(node), p + " = " + shown + ": " + why, allowed));
         return RecordBinder.FAILED;
     }
 

@@ -156,6 +156,24 @@ class AlternatorModelTest {
     }
 
     @Test
+    void a_measured_ke_or_inductance_is_admitted_only_where_the_model_works() {
+        AlternatorSpec s = SampleDesigns.axial24V();
+        // 1e-200 H gave a 500 (an interval error in the pulse integration), 1e-12 H a NaN output power, and a Ke of
+        // 1e-12 V/rpm an error about frequencyHz, a field nobody sent: all are now refused under their own names
+        for (double l : new double[] {Double.MIN_VALUE, 1e-200, 1e-12, 9.9e-7}) {
+            InvalidInputException e = assertThrows(InvalidInputException.class, () -> s.withPhaseInductanceH(l));
+            assertEquals("phaseInductanceH", e.errors().get(0).field());
+        }
+        for (double ke : new double[] {1e-12, 9.9e-5}) {
+            InvalidInputException e = assertThrows(InvalidInputException.class, () -> s.withMeasuredKeLineVPerRpm(ke));
+            assertEquals("measuredKeLineVPerRpm", e.errors().get(0).field());
+        }
+        assertEquals(1e-6, AlternatorModel.build(s.withPhaseInductanceH(1e-6)).phaseInductanceH(), 0);
+        assertTrue(AlternatorModel.build(s.withMeasuredKeLineVPerRpm(1e-4)).keLineRmsVPerRpm() > 0);
+        assertEquals(0.0, s.withPhaseInductanceH(0).phaseInductanceH(), "0 still means estimate");
+    }
+
+    @Test
     void magnets_that_overlap_are_refused_under_the_rotor_field() {
         AlternatorSpec s = SampleDesigns.axial24V();
         AlternatorSpec crowded = new AlternatorSpec(s.winding().withPoles(32), 36, Connection.STAR,

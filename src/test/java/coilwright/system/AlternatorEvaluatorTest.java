@@ -28,6 +28,18 @@ class AlternatorEvaluatorTest {
     }
 
     @Test
+    void the_speed_sweep_checks_the_time_budget_once_per_point() throws Exception {
+        EvaluationRequest big = new EvaluationRequest(SampleDesigns.axial24V(), battery24(), new SpeedRange(0, 500, 1000), 350, 600);
+        try (coilwright.validation.TimeBudget b = coilwright.validation.TimeBudget.open(1)) {
+            Thread.sleep(5);
+            coilwright.validation.SolverFailedException e = assertThrows(coilwright.validation.SolverFailedException.class,
+                    () -> AlternatorEvaluator.evaluate(big));
+            assertEquals("speedRange.points", e.field());
+        }
+        assertEquals(1000, AlternatorEvaluator.evaluate(big).points().size(), "without a budget it runs to the end");
+    }
+
+    @Test
     void closed_form_and_solved_cut_in_agree() {
         AlternatorEvaluation e = AlternatorEvaluator.evaluate(axial(600));
         assertTrue(e.cutInSpeedRpm() > 50 && e.cutInSpeedRpm() < 300, "plausible cut-in " + e.cutInSpeedRpm());

@@ -111,10 +111,44 @@ public final class SvgCharts {
         g2.setDefsKeyPrefix(id + "-");
         g2.setGeomDoubleConverter(SvgCharts::twoDecimals);
         chart.draw(g2, new Rectangle(0, 0, widthPx, heightPx));
-        String svg = g2.getSVGElement(id);
+        String svg = presentationAttributes(g2.getSVGElement(id));
         int open = svg.indexOf('>', svg.indexOf("<svg"));
         return svg.substring(0, open) + " role=\"img\" aria-labelledby=\"" + id + "-title\">"
                 + "<title id=\"" + id + "-title\">" + escape(title) + "</title>" + svg.substring(open + 1);
+    }
+
+    private static final java.util.regex.Pattern STYLE = java.util.regex.Pattern.compile("style='([^']*)'");
+    private static final java.util.regex.Pattern LONG_DECIMAL = java.util.regex.Pattern.compile("(\\d+\\.\\d{2})\\d+");
+
+    /**
+     * JFreeSVG writes each element's paint as a {@code style} attribute, which a Content-Security-Policy without
+     * {@code 'unsafe-inline'} refuses; every property it writes is also an SVG presentation attribute, so each
+     * {@code style='a:b;c:d'} becomes {@code a="b" c="d"} (long decimals cut to two places). The drawing is the same.
+     */
+    static String presentationAttributes(String svg) {
+        java.util.regex.Matcher m = STYLE.matcher(svg);
+        StringBuilder out = new StringBuilder(svg.length());
+        while (m.find()) {
+            StringBuilder attrs = new StringBuilder();
+            for (String declaration : m.group(1).split(";")) {
+                int colon = declaration.indexOf(':');
+                if (colon <= 0) {
+                    continue;
+                }
+                String name = declaration.substring(0, colon).strip();
+                String value = LONG_DECIMAL.matcher(declaration.substring(colon + 1).strip()).replaceAll("$1");
+                if (!name.matches("[a-z-]+") || value.contains("\"") || value.contains("'")) {
+                    continue;
+                }
+                if (attrs.length() > 0) {
+                    attrs.append(' ');
+                }
+                attrs.append(name).append("=\"").append(value).append('"');
+            }
+            m.appendReplacement(out, java.util.regex.Matcher.quoteReplacement(attrs.toString()));
+        }
+        m.appendTail(out);
+        return out.toString();
     }
 
     private static XYSeriesCollection dataset(List<Series> series) {

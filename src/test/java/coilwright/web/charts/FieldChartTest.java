@@ -60,7 +60,7 @@ class FieldChartTest {
 
     /** The fill colours of the drawn shapes. */
     private static List<String> fills(String svg) {
-        Matcher m = Pattern.compile("fill: ?(#[0-9a-fA-F]{6}|rgb\\([^)]*\\))").matcher(svg);
+        Matcher m = Pattern.compile("fill(?:: ?|=\")(#[0-9a-fA-F]{6}|rgb\\([^)]*\\))").matcher(svg);
         List<String> out = new ArrayList<>();
         while (m.find()) {
             out.add(m.group(1));

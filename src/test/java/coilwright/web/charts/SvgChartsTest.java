@@ -55,6 +55,18 @@ class SvgChartsTest {
     }
 
     @Test
+    void paints_with_presentation_attributes_not_inline_style_so_a_strict_policy_allows_it() throws Exception {
+        String svg = SvgCharts.lineChart(emfChart());
+        assertFalse(svg.contains("style="), "no style attribute");
+        assertTrue(svg.contains("stroke=\"rgb("), "the series keep their colour");
+        assertFalse(java.util.regex.Pattern.compile("stroke-width=\"\\d+\\.\\d{3,}").matcher(svg).find(),
+                "long decimals are cut: 2.200000047683716 -> 2.2");
+        parse(svg);
+        assertEquals("<g fill=\"none\" stroke=\"rgb(1,2,3)\">",
+                SvgCharts.presentationAttributes("<g style='fill:none; stroke: rgb(1,2,3);'>"));
+    }
+
+    @Test
     void gives_each_chart_its_own_id_so_several_fit_on_one_page() {
         String a = SvgCharts.lineChart(emfChart());
         String b = SvgCharts.lineChart(emfChart());

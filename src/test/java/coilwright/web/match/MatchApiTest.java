@@ -24,7 +24,7 @@ import static org.hamcrest.Matchers.lessThanOrEqualTo;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-class MatchApiTest {
+public class MatchApiTest {
     @RegisterExtension
     static final TestApp APP = new TestApp();
     private static final ObjectMapper JSON = new ObjectMapper();
@@ -44,7 +44,7 @@ class MatchApiTest {
         }
     }
 
-    static ObjectNode windBody() throws IOException {
+    public static ObjectNode windBody() throws IOException {
         ObjectNode b = example("axial-wind-48v");
         ObjectNode rotor = b.putObject("rotor");
         rotor.put("diameterM", 3.6).put("bladeCount", 3);
@@ -56,7 +56,7 @@ class MatchApiTest {
         return b;
     }
 
-    static ObjectNode hydroBody() throws IOException {
+    public static ObjectNode hydroBody() throws IOException {
         ObjectNode b = example("radial-hydro-48v");
         ObjectNode site = b.putObject("site").put("grossHeadM", 28).put("designFlowM3s", 0.012);
         site.putArray("flowDuration").addObject().put("flowM3s", 0.02).put("percentOfTime", 0);

@@ -12,7 +12,7 @@ import coilwright.winding.Layers;
 import java.util.Optional;
 
 /** Request bodies for the rewind tests: an invented 12-coil, 16-pole air-cored machine read at 300 rpm. */
-final class Bodies {
+public final class Bodies {
     static final double VOLTS = 41.5;
     static final double RPM = 300;
 
@@ -35,7 +35,7 @@ final class Bodies {
         return Json.mapper().valueToTree(new RewindRequest(machine, target));
     }
 
-    static ObjectNode request() {
+    public static ObjectNode request() {
         return request(machine(), battery());
     }
 
