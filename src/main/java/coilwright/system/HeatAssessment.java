@@ -96,9 +96,9 @@ public final class HeatAssessment {
     public static List<Caution> cautions(Alternator alt, HeatAndLosses h) {
         List<Caution> out = new ArrayList<>();
         MachineLimitCautions.demagnetisation(h.demagnetisation()).ifPresent(out::add);
-        MachineLimitCautions.windingTemperature(Math.min(h.rated().windingHotSpotC(), 1000), alt.spec()
-                        .insulationClass(), String.format(Locale.ROOT, "at the rated speed of %.0f rpm", h.rated().speedRpm()), false)
-                .ifPresent(out::add);
+        String where = String.format(Locale.ROOT, "at the rated speed of %.0f rpm", h.rated().speedRpm());
+        MachineLimitCautions.windingTemperature(Math.min(h.rated().windingHotSpotC(), 1000),
+                alt.spec().insulationClass(), where, false).ifPresent(out::add);
         out.sort(Comparator.comparing(Caution::severity));
         return out;
     }

@@ -33,19 +33,20 @@ import java.util.function.ToDoubleFunction;
 record HeatView(String basis, List<Figure> figures, List<String> headings, List<List<String>> rows, String chart,
                 List<String> assumptions) {
 
-    private record Column(String heading, ToDoubleFunction<LossPoint> value, boolean loss) {
+    /** A loss: its table heading and its short name under the chart's bar. */
+    private record Column(String heading, String bar, ToDoubleFunction<LossPoint> value) {
     }
 
     private static final List<Column> LOSSES = List.of(
-            new Column("Copper", LossPoint::windingCopperLossW, true),
-            new Column("Eddy in conductors", LossPoint::conductorEddyLossW, true),
-            new Column("Delta circulation", LossPoint::deltaCirculationLossW, true),
-            new Column("Stator iron", LossPoint::statorIronLossW, true),
-            new Column("Bearings", LossPoint::bearingFrictionLossW, true),
-            new Column("Windage", LossPoint::windageLossW, true),
-            new Column("Diodes", LossPoint::diodeLossW, true),
-            new Column("Cables", LossPoint::cableLossW, true),
-            new Column("Battery", LossPoint::batteryInternalLossW, true));
+            new Column("Copper", "Copper", LossPoint::windingCopperLossW),
+            new Column("Eddy in conductors", "Eddy", LossPoint::conductorEddyLossW),
+            new Column("Delta circulation", "Delta", LossPoint::deltaCirculationLossW),
+            new Column("Stator iron", "Iron", LossPoint::statorIronLossW),
+            new Column("Bearings", "Bearings", LossPoint::bearingFrictionLossW),
+            new Column("Windage", "Windage", LossPoint::windageLossW),
+            new Column("Diodes", "Diodes", LossPoint::diodeLossW),
+            new Column("Cables", "Cables", LossPoint::cableLossW),
+            new Column("Battery", "Battery", LossPoint::batteryInternalLossW));
 
     static HeatView of(AlternatorEvaluation e, Units units) {
         HeatAndLosses h = e.heatAndLosses();
@@ -103,7 +104,7 @@ record HeatView(String basis, List<Figure> figures, List<String> headings, List<
     }
 
     private static String chart(LossPoint rated, List<Column> shown) {
-        List<String> names = shown.stream().map(Column::heading).toList();
+        List<String> names = shown.stream().map(Column::bar).toList();
         double[] watts = shown.stream().mapToDouble(c -> c.value().applyAsDouble(rated)).toArray();
         double top = 1.1 * java.util.Arrays.stream(watts).max().orElse(0);
         Map<String, double[]> series = new LinkedHashMap<>();
