@@ -39,6 +39,9 @@ class SecurityHeadersTest {
             }
             String path = route.path().replace("{designId}", ids.get("designId"))
                     .replace("{revisionId}", ids.get("revisionId"));
+            if (path.contains("{jobId}")) {
+                path = path.replace("{jobId}", sizingJobId());
+            }
             if (path.equals("/design/results")) {
                 path += "?example=" + ids.get("slug");
             }
@@ -52,6 +55,17 @@ class SecurityHeadersTest {
             checked.add(path);
         }
         assertTrue(checked.size() >= 12, "pages checked: " + checked);
+    }
+
+    /** A small sizing search started as a job, for the job's progress page. */
+    private static String sizingJobId() {
+        try (var in = SecurityHeadersTest.class.getClassLoader().getResourceAsStream("sizing/small-axial-wind-24v.json")) {
+            String body = new String(in.readAllBytes(), java.nio.charset.StandardCharsets.UTF_8);
+            return given().contentType("application/json").header("Prefer", "respond-async").body(body)
+                    .post("/api/v1/sizing").then().statusCode(202).extract().path("id");
+        } catch (java.io.IOException e) {
+            throw new java.io.UncheckedIOException(e);
+        }
     }
 
     @Test
