@@ -19,6 +19,7 @@ import coilwright.web.api.EvaluationApi;
 import coilwright.web.match.MatchApi;
 import coilwright.web.match.MatchPages;
 import coilwright.web.pages.DesignPage;
+import coilwright.web.pages.RevisionForm;
 import coilwright.web.pages.HomePage;
 import coilwright.web.pages.ThymeleafRenderer;
 import coilwright.web.pages.WindingPage;
@@ -119,6 +120,7 @@ public final class App {
         MatchPages match = new MatchPages(services.matching(), services.examples(), binder);
         RewindPage rewind = new RewindPage(services.rewind(), new FormBinder(binder));
         SavedDesignPages saved = new SavedDesignPages(services.designs());
+        RevisionForm revision = new RevisionForm(services.designs());
         return List.of(
                 Route.get("/health", new HealthHandler(ready, services.designs()::isStoreReachable)),
                 Route.get("/metrics", metrics),
@@ -167,8 +169,8 @@ public final class App {
                 Route.get("/d/{designId}/r/{revisionId}", saved::revision),
                 Route.get("/d/{designId}/r/{revisionId}/recomputed", saved::recomputed),
                 Route.get("/d/{designId}/r/{revisionId}/print", saved::print),
-                Route.get("/d/{designId}/revise", saved::reviseForm),
-                Route.post("/d/{designId}/revise", saved::revise),
+                Route.get("/d/{designId}/revise", revision::show),
+                Route.post("/d/{designId}/revise", revision::revise),
                 Route.get("/compare", saved::compare),
                 Route.get("/demos", saved::demos));
     }
