@@ -30,6 +30,11 @@ public record Choice(String value, String label) {
         return Arrays.stream(constants).map(c -> new Choice(c.name(), Words.of(c))).toList();
     }
 
+    /** Enum names as options, each shown in the trade's words ({@link Words}). */
+    public static List<Choice> words(String... names) {
+        return Arrays.stream(names).map(n -> new Choice(n, Words.of(n))).toList();
+    }
+
     /** Value to label, in the map's order. */
     public static List<Choice> labelled(Map<String, String> labels) {
         return labels.entrySet().stream().map(e -> new Choice(e.getKey(), e.getValue())).toList();

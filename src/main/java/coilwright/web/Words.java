@@ -1,7 +1,11 @@
 package coilwright.web;
 
+import java.util.List;
 import java.util.Locale;
 import java.util.Map;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
+import java.util.stream.Collectors;
 
 /**
  * The words a practitioner uses for the core's enum values: pages and selects show these, the API keeps the enum
@@ -48,7 +52,60 @@ public final class Words {
             Map.entry("WARNING", "Warning"),
             Map.entry("NOTICE", "Note"));
 
+    /** Symbols written plainly in the core's messages, as a page shows them. */
+    private static final String[][] SYMBOLS = {
+            {"A/mm^2", "A/mm²"}, {"mm^2", "mm²"}, {"m^2", "m²"}, {"m^3", "m³"}, {"N*m", "N·m"}, {"R_LL", "R line-to-line"}};
+    private static final Pattern CODE_NAME = Pattern.compile("\\b[A-Z][A-Z0-9]*_[A-Z0-9_]+\\b");
+    private static final Pattern DEGREES = Pattern.compile("(\\d) C\\b");
+    private static final Pattern OHM = Pattern.compile("(\\d) ?[Oo]hms?\\b");
+
+    /** One instance for templates: {@code ${words.of(x)}}, {@code ${words.inText(message)}}. */
+    public static final Words INSTANCE = new Words();
+
     private Words() {
+    }
+
+    /** As {@link #of(Enum)}, for templates. */
+    public String word(Enum<?> value) {
+        return of(value);
+    }
+
+    /** As {@link #of(String)}, for templates (a severity read from a saved snapshot). */
+    public String word(String name) {
+        return of(name);
+    }
+
+    /** Enum values in words, joined by commas: a match point's flags. */
+    public String list(List<? extends Enum<?>> values) {
+        return values.stream().map(Words::of).collect(Collectors.joining(", "));
+    }
+
+    /**
+     * A message of the core as a page shows it: code names in words, "70 C" as "70 °C", "A/mm^2" as "A/mm²",
+     * "N*m" as "N·m", ohms as Ω.
+     */
+    public static String inText(String message) {
+        if (message == null) {
+            return "";
+        }
+        String s = message;
+        for (String[] sym : SYMBOLS) {
+            s = s.replace(sym[0], sym[1]);
+        }
+        s = DEGREES.matcher(s).replaceAll("$1 °C");
+        s = OHM.matcher(s).replaceAll("$1 Ω");
+        Matcher m = CODE_NAME.matcher(s);
+        StringBuilder out = new StringBuilder();
+        while (m.find()) {
+            m.appendReplacement(out, Matcher.quoteReplacement(of(m.group()).toLowerCase(Locale.ROOT)));
+        }
+        m.appendTail(out);
+        return out.toString();
+    }
+
+    /** As {@link #inText(String)}, for templates. */
+    public String text(String message) {
+        return inText(message);
     }
 
     /** The word for an enum value. */

@@ -212,6 +212,21 @@ class JourneyPagesTest {
     }
 
     @Test
+    void the_rewind_pages_reached_by_post_switch_units_by_get_with_the_input_converted() {
+        Html form = get("/rewind", 200);
+        Map<String, String> plan = formOf(form, "form[action=/rewind]");
+        plan.put("machine.measurements.measuredTemperatureC", "25");
+        Html planned = post("/rewind", plan, 200);
+        Html imperial = get(unitsLink(planned, "imperial"), 200);
+        assertTrue(imperial.has("results"), "the plan is shown again");
+        assertEquals("77", imperial.value("machine.measurements.measuredTemperatureC"), "25 °C is 77 °F");
+        assertEquals(planned.id("derived").text(), imperial.id("derived").text());
+
+        Html options = post("/rewind/stator-options", formOf(form, "form[action=/rewind/stator-options]"), 200);
+        assertTrue(get(unitsLink(options, "imperial"), 200).has("stator-options"));
+    }
+
+    @Test
     void a_carried_design_that_cannot_be_read_is_a_400_naming_it() {
         Html page = get("/design/results?design=not-a-design", 400);
         assertTrue(page.text().contains("cannot be read"), page.text());

@@ -46,6 +46,7 @@ public final class ThymeleafRenderer implements FileRenderer {
         page.setVariables(new java.util.HashMap<>(model));
         page.setVariable("path", ctx.path());
         page.setVariable("here", UnitsSwitch.here(ctx));
+        page.setVariable("words", coilwright.web.Words.INSTANCE);
         Units units = Units.of(ctx);
         page.setVariable("units", units);
         page.setVariable("fmt", new Fmt(units));
