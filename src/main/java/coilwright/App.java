@@ -154,6 +154,7 @@ public final class App {
                 Route.get("/design/new", design::newDesign),
                 Route.post("/design", design::submit),
                 Route.get("/design/results", design::exampleResults),
+                Route.get("/design/bench", design::bench),
                 Route.get("/winding", winding::show),
                 Route.get("/match/wind", match::windForm),
                 Route.post("/match/wind", match::windResult),

@@ -148,12 +148,12 @@ class BrowserJourneyTest {
         List<String> pages = new ArrayList<>();
         for (Route r : APP.app().routes()) {
             if (r.method() == HandlerType.GET && !Route.isApiPath(r.path()) && !r.path().contains("{")
-                    && !r.path().equals("/design/results")) {
+                    && !r.path().equals("/design/results") && !r.path().equals("/design/bench")) {
                 pages.add(r.path());
             }
         }
         pages.addAll(List.of("/design/results?example=rewound-motor-12v", "/design/results?example=axial-wind-48v",
-                "/winding?slots=36&poles=4", "/demos"));
+                "/winding?slots=36&poles=4", "/demos", "/design/bench?example=rewound-motor-12v"));
         List<String> wide = new ArrayList<>();
         try (Browser browser = Browser.open()) {
             ChromeDriver d = browser.driver();

@@ -226,6 +226,40 @@ class JourneyPagesTest {
         assertTrue(get(unitsLink(options, "imperial"), 200).has("stator-options"));
     }
 
+    private static String row(Html page, String table, String label) {
+        return page.all("#" + table + " tr").stream().filter(r -> r.selectFirst("th").text().equals(label))
+                .findFirst().orElseThrow(() -> new AssertionError("no row " + label)).selectFirst("td").text();
+    }
+
+    private static double leading(String text) {
+        return Double.parseDouble(text.substring(0, text.indexOf(' ')));
+    }
+
+    @Test
+    void the_bench_sheet_lists_what_to_wind_and_what_to_measure_at_a_chosen_test_speed() {
+        Html bench = get(results(37).id("next-bench").attr("href"), 200);
+        assertEquals("37", row(bench, "bench-build", "Turns per coil"));
+        assertEquals("Star (Y)", row(bench, "bench-build", "Connection"));
+        double rPhase = leading(row(bench, "bench-check", "Resistance of one phase at 20 °C"));
+        double rLine = leading(row(bench, "bench-check", "Resistance between two line leads at 20 °C"));
+        // common practice: in star the meter between two line leads reads two phases in series
+        assertEquals(2 * rPhase, rLine, 0.01 * rLine);
+        assertTrue(bench.id("leads").text().startsWith("Star (Y): join the finishes"));
+        assertFalse(bench.all(".phase-order li").isEmpty());
+        assertFalse(bench.all("figure.unrolled").isEmpty());
+
+        Map<String, String> f = formOf(bench, ".test-speed");
+        f.put("testRpm", "200");
+        Html at200 = Html.of(given().queryParams(f).get("/design/bench").then().statusCode(200).extract().response());
+        f.put("testRpm", "400");
+        Html at400 = Html.of(given().queryParams(f).get("/design/bench").then().statusCode(200).extract().response());
+        String label = "Open-circuit line voltage at the test speed";
+        assertEquals(2 * leading(row(at200, "bench-check", label)), leading(row(at400, "bench-check", label)),
+                0.01 * leading(row(at400, "bench-check", label)), "the open-circuit voltage is proportional to speed");
+        f.put("testRpm", "-5");
+        given().queryParams(f).get("/design/bench").then().statusCode(400);
+    }
+
     @Test
     void a_carried_design_that_cannot_be_read_is_a_400_naming_it() {
         Html page = get("/design/results?design=not-a-design", 400);

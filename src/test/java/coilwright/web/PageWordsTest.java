@@ -50,10 +50,12 @@ class PageWordsTest {
         for (String slug : APP.app().services().examples().slugs()) {
             pages.add("/design/results?example=" + slug);
             pages.add("/design/new?example=" + slug);
+            pages.add("/design/bench?example=" + slug);
         }
         pages.add("/winding?slots=36&poles=4");
         pages.add("/compare?a=" + rev + "&b=" + id);
         pages.remove("/design/results");
+        pages.remove("/design/bench");
         return pages;
     }
 

@@ -6,11 +6,13 @@ import coilwright.system.EvaluationRequest;
 import coilwright.web.CarriedDesign;
 import coilwright.web.FormPage;
 import coilwright.web.FormResult;
+import coilwright.web.NextSteps;
 import coilwright.web.NotFoundException;
 import coilwright.web.units.Units;
 import io.javalin.http.Context;
 import java.util.HashMap;
 import java.util.Map;
+import java.util.Optional;
 
 /**
  * The design form ({@code GET /design/new}, {@code POST /design}) and the results of the examples
@@ -78,6 +80,23 @@ public final class DesignPage {
                 service.evaluate(request), Units.of(ctx)));
         model.put("notes", example.document().notes());
         ctx.render("results", model);
+    }
+
+    /**
+     * {@code GET /design/bench?design=} (or {@code ?example=slug}): the design's bench sheet, its open-circuit
+     * voltage at {@code testRpm} (default: the rated speed).
+     */
+    public void bench(Context ctx) {
+        String carried = ctx.queryParam(CarriedDesign.FIELD);
+        ExampleCatalogue.Example example = carried == null ? examples.require("example", ctx.queryParam("example")) : null;
+        EvaluationRequest request = example == null ? CarriedDesign.decode(carried) : example.document().design();
+        double testRpm = TestSpeed.parse(ctx.queryParam("testRpm"), request.effectiveRatedSpeedRpm());
+        String title = example == null ? Optional.ofNullable(ctx.queryParam("title")).filter(t -> !t.isBlank())
+                .orElse(YOUR_DESIGN) : example.title();
+        Map<String, Object> model = BenchSheet.of(title, request, service.evaluate(request), testRpm, Units.of(ctx));
+        model.put("next", NextSteps.of(request, title));
+        model.put("carried", CarriedDesign.encode(request));
+        ctx.render("bench", model);
     }
 
     private ExampleCatalogue.Example known(String slug) {
