@@ -209,6 +209,19 @@ class JourneyPagesTest {
         assertEquals("2", second.doc().selectFirst(".revision-line strong").text());
         assertEquals("Workshop alternator, 41 turns", second.doc().selectFirst("h1").text());
         assertEquals("41", get(second.id("next-change").attr("href"), 200).value("alternator.turnsPerCoil"));
+
+        Html compare = get(second.all(".history a[href^=/compare]").get(0).attr("href"), 200);
+        Element efficiency = compare.all("table.compare-results tr").stream()
+                .filter(r -> r.text().startsWith("Efficiency at rated speed")).findFirst().orElseThrow();
+        assertEquals("%", efficiency.child(1).text(), "efficiency as a percentage");
+        Element cutIn = compare.all("table.compare-results tr").stream()
+                .filter(r -> r.text().startsWith("Cut-in speed (differs)")).findFirst().orElseThrow();
+        double first = Double.parseDouble(cutIn.child(2).text());
+        double then = Double.parseDouble(cutIn.child(3).text());
+        assertTrue(then < first, "more turns cut in sooner");
+        assertTrue(cutIn.selectFirst(".difference").text().startsWith("-"), cutIn.text());
+        assertEquals(String.format(java.util.Locale.ROOT, "%+.1f %%", 100 * (then - first) / first),
+                cutIn.selectFirst(".change").text(), cutIn.text());
     }
 
     @Test
