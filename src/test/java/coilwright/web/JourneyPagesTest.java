@@ -212,10 +212,10 @@ class JourneyPagesTest {
 
         Html compare = get(second.all(".history a[href^=/compare]").get(0).attr("href"), 200);
         Element efficiency = compare.all("table.compare-results tr").stream()
-                .filter(r -> r.text().startsWith("Efficiency at rated speed")).findFirst().orElseThrow();
+                .filter(row -> row.text().startsWith("Efficiency at rated speed")).findFirst().orElseThrow();
         assertEquals("%", efficiency.child(1).text(), "efficiency as a percentage");
         Element cutIn = compare.all("table.compare-results tr").stream()
-                .filter(r -> r.text().startsWith("Cut-in speed (differs)")).findFirst().orElseThrow();
+                .filter(row -> row.text().startsWith("Cut-in speed (differs)")).findFirst().orElseThrow();
         double first = Double.parseDouble(cutIn.child(2).text());
         double then = Double.parseDouble(cutIn.child(3).text());
         assertTrue(then < first, "more turns cut in sooner");
