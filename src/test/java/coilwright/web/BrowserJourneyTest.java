@@ -140,6 +140,34 @@ class BrowserJourneyTest {
             assertTrue(inputs.stream().anyMatch(t -> t.contains("turnsPerCoil") && t.contains("28") && t.contains("31")), inputs.toString());
             assertTrue(d.findElements(By.cssSelector("table.compare-results tr.differs")).size() > 0, "results differ");
             screenshot(d, "consultant-compare");
+
+            click(d, "table.compare-sides tbody tr:nth-child(2) td:nth-child(3) a");
+            click(d, ".exports a[href$='/print']");
+            assertEquals("Client A, 31 turns", text(d, "h1"));
+            assertFalse(d.findElements(By.cssSelector(".saved-results .summary .figure")).isEmpty(), "the print view has the results");
+        }
+    }
+
+    @Test
+    void a_rewinder_plans_a_reconnection_evaluates_it_and_reads_the_bench_sheet() {
+        try (Browser browser = Browser.open()) {
+            ChromeDriver d = browser.driver();
+            d.manage().window().setSize(new Dimension(1300, 1000));
+            d.get(APP.url("/rewind"));
+            click(d, "form[action='/rewind'] button[type=submit]");
+            click(d, "#reconnections tbody tr:first-child a");
+            click(d, "form button[type=submit]");
+            assertTrue(d.findElements(By.cssSelector(".error-summary")).isEmpty(),
+                    () -> "the option evaluates: " + d.findElement(By.cssSelector(".error-summary")).getText());
+            click(d, "#next-bench");
+            type(d, "testRpm", "300");
+            click(d, ".test-speed button");
+            screenshot(d, "rewinder-bench");
+            String voltage = d.findElements(By.cssSelector("#bench-check tr")).stream().map(WebElement::getText)
+                    .filter(t -> t.startsWith("Open-circuit line voltage at the test speed")).findFirst().orElseThrow();
+            // the planner's default machine was measured at 41.5 V line at 300 rpm; its measured constant is carried over
+            assertTrue(voltage.contains("41.5 V rms"), voltage);
+            assertFalse(d.findElements(By.cssSelector(".phase-order li")).isEmpty(), "the coils of each phase in order");
         }
     }
 
