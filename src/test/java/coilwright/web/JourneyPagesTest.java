@@ -41,17 +41,10 @@ class JourneyPagesTest {
         return Html.of(r.then().contentType(startsWith("text/html")).extract().response());
     }
 
-    /** Every named field of the page's form with the value it shows, as a browser would post them. */
+    /** Every named field of the forms matched, with the values they show, as a browser would post them. */
     private static Map<String, String> formOf(Html page, String formCss) {
         Map<String, String> f = new LinkedHashMap<>();
-        for (Element e : page.all(formCss + " input[name], " + formCss + " select[name], " + formCss + " textarea[name]")) {
-            if (e.tagName().equals("select")) {
-                Element opt = e.selectFirst("option[selected]");
-                f.put(e.attr("name"), opt == null ? e.selectFirst("option").val() : opt.val());
-            } else if (!e.attr("type").equals("checkbox") || e.hasAttr("checked")) {
-                f.put(e.attr("name"), e.val());
-            }
-        }
+        page.all(formCss).forEach(form -> f.putAll(PageWordsTest.values(form)));
         return f;
     }
 

@@ -41,7 +41,7 @@ final class BenchSheet {
                 List.of("Magnet poles", Integer.toString(spec.winding().poles())),
                 List.of("Phases", Integer.toString(phases)),
                 List.of("Coil sides per slot", Words.of(spec.winding().layers())),
-                List.of("Coil pitch", w.coilPitchSlots() + " slots"),
+                List.of("Coil pitch", w.coilPitchSlots() + (w.coilPitchSlots() == 1 ? " slot" : " slots")),
                 List.of("Coils", Integer.toString(w.coils().size())),
                 List.of("Coils per phase", Integer.toString(w.coilsPerPhase())),
                 List.of("Parallel paths", Integer.toString(spec.winding().parallelPaths())),
