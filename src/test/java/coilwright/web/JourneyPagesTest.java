@@ -174,6 +174,12 @@ class JourneyPagesTest {
 
         Html saved = get(path, 200);
         assertEquals("Workshop alternator", saved.doc().selectFirst("h1").text());
+        assertEquals("37", input(saved, "Winding", "Turns per coil").isEmpty() ? input(saved, "Machine", "Turns per coil")
+                : input(saved, "Winding", "Turns per coil"));
+        assertEquals("Star (Y)", input(saved, "Machine", "Connection"));
+        assertEquals("10 mm", input(saved, "Rotor and magnets", "Magnet thickness"));
+        assertEquals("0.3937 in", input(get(path + "?units=imperial", 200), "Rotor and magnets", "Magnet thickness"));
+        assertEquals("12", input(saved, "Battery", "Cells"));
         String revise = saved.id("next-revise").attr("href");
         Html form = get(revise, 200);
         assertEquals("37", form.value("alternator.turnsPerCoil"));
@@ -230,6 +236,13 @@ class JourneyPagesTest {
 
         Html options = post("/rewind/stator-options", formOf(form, "form[action=/rewind/stator-options]"), 200);
         assertTrue(get(unitsLink(options, "imperial"), 200).has("stator-options"));
+    }
+
+    /** A saved design's input, by its group and label; empty when absent. */
+    private static String input(Html page, String group, String label) {
+        return page.all("#design-inputs table").stream().filter(t -> t.selectFirst("caption").text().equals(group))
+                .flatMap(t -> t.select("tr").stream()).filter(r -> r.selectFirst("th").text().equals(label))
+                .map(r -> r.selectFirst("td").text()).findFirst().orElse("");
     }
 
     private static String row(Html page, String table, String label) {

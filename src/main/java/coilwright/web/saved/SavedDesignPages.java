@@ -9,6 +9,8 @@ import coilwright.system.EvaluationRequest;
 import coilwright.web.CarriedDesign;
 import coilwright.web.Json;
 import coilwright.web.NextSteps;
+import coilwright.web.pages.DesignInputs;
+import coilwright.web.units.Units;
 import coilwright.web.NotFoundException;
 import coilwright.web.RecordBinder;
 import com.fasterxml.jackson.core.JsonProcessingException;
@@ -85,7 +87,8 @@ public final class SavedDesignPages {
 
     public void print(Context ctx) {
         SavedRevision r = ofDesign(ctx);
-        ctx.render("saved-print", Map.of("rev", r, "results", ResultView.of(library.tree(r.resultJson()))));
+        ctx.render("saved-print", Map.of("rev", r, "results", ResultView.of(library.tree(r.resultJson())),
+                "inputs", DesignInputs.of(library.document(r).design(), Units.of(ctx))));
     }
 
     public void compare(Context ctx) {
@@ -109,7 +112,9 @@ public final class SavedDesignPages {
         model.put("history", library.history(r.designId()));
         model.put("again", again);
         model.put("recomputedView", recomputedView);
-        model.put("next", NextSteps.saved(library.document(r).design(), r.title(), r.designId()));
+        var design = library.document(r).design();
+        model.put("next", NextSteps.saved(design, r.title(), r.designId()));
+        model.put("inputs", DesignInputs.of(design, Units.of(ctx)));
         model.put("results", ResultView.of(recomputedView && again.results().isPresent() ? again.results().get()
                 : library.tree(r.resultJson())));
         ctx.render("saved-revision", model);
