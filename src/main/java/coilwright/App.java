@@ -23,6 +23,7 @@ import coilwright.web.api.EvaluationApi;
 import coilwright.web.match.MatchApi;
 import coilwright.web.match.MatchPages;
 import coilwright.web.pages.DesignPage;
+import coilwright.web.pages.RevisionForm;
 import coilwright.web.pages.HomePage;
 import coilwright.web.pages.ThymeleafRenderer;
 import coilwright.web.pages.WindingPage;
@@ -151,6 +152,7 @@ public final class App {
         MatchPages match = new MatchPages(services.matching(), services.examples(), binder);
         RewindPage rewind = new RewindPage(services.rewind(), new FormBinder(binder));
         SavedDesignPages saved = new SavedDesignPages(services.designs());
+        RevisionForm revision = new RevisionForm(services.designs());
         return List.of(
                 Route.get("/health", new HealthHandler(ready, services.designs()::isStoreReachable)),
                 Route.get("/metrics", metrics),
@@ -189,6 +191,7 @@ public final class App {
                 Route.get("/design/new", design::newDesign),
                 Route.post("/design", work.guard(design::submit)),
                 Route.get("/design/results", work.guard(design::exampleResults)),
+                Route.get("/design/bench", work.guard(design::bench)),
                 Route.get("/winding", work.guard(winding::show)),
                 Route.get("/match/wind", match::windForm),
                 Route.post("/match/wind", work.guard(match::windResult)),
@@ -208,8 +211,8 @@ public final class App {
                 Route.get("/d/{designId}/r/{revisionId}", saved::revision),
                 Route.get("/d/{designId}/r/{revisionId}/recomputed", work.guard(saved::recomputed)),
                 Route.get("/d/{designId}/r/{revisionId}/print", saved::print),
-                Route.get("/d/{designId}/revise", saved::reviseForm),
-                Route.post("/d/{designId}/revise", work.guard(saved::revise)).withUploads(),
+                Route.get("/d/{designId}/revise", revision::show),
+                Route.post("/d/{designId}/revise", work.guard(revision::revise)).withUploads(),
                 Route.get("/compare", work.guard(saved::compare)),
                 Route.get("/demos", saved::demos));
     }

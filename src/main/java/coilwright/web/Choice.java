@@ -25,9 +25,14 @@ public record Choice(String value, String label) {
         return of(List.of(values));
     }
 
-    /** An enum's names as options. */
+    /** An enum's values as options: the name is posted, the trade's word for it shown ({@link Words}). */
     public static List<Choice> names(Enum<?>[] constants) {
-        return of(Arrays.stream(constants).map(Enum::name).toList());
+        return Arrays.stream(constants).map(c -> new Choice(c.name(), Words.of(c))).toList();
+    }
+
+    /** Enum names as options, each shown in the trade's words ({@link Words}). */
+    public static List<Choice> words(String... names) {
+        return Arrays.stream(names).map(n -> new Choice(n, Words.of(n))).toList();
     }
 
     /** Value to label, in the map's order. */

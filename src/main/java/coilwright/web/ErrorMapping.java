@@ -55,7 +55,8 @@ public final class ErrorMapping {
         routes.exception(NotFoundException.class, (e, ctx) -> respond(ctx, problem("not-found", 404, e.getMessage(), ctx)));
         routes.exception(ForbiddenException.class, (e, ctx) -> respond(ctx, problem("forbidden", 403, e.getMessage(), ctx)));
         routes.exception(NoSuchDesignException.class, (e, ctx) -> respond(ctx, problem("not-found", 404, e.getMessage(), ctx)));
-        routes.exception(EditNotAllowedException.class, (e, ctx) -> respond(ctx, problem("forbidden", 403, e.getMessage(), ctx)));
+        routes.exception(EditNotAllowedException.class, (e, ctx) -> failed(ctx, 403, "editToken", e.getMessage(),
+                problem("forbidden", 403, e.getMessage(), ctx)));
         routes.exception(DesignStoreUnavailableException.class, (e, ctx) -> respond(ctx.header("Retry-After", "5"),
                 problem("service-unavailable", 503, e.getMessage(), ctx)));
         routes.exception(coilwright.service.SizingBusyException.class, (e, ctx) -> respond(ctx.header("Retry-After",

@@ -8,25 +8,38 @@ import coilwright.system.HydroMatchResult;
 import coilwright.system.RunnerKind;
 import coilwright.system.WindMatchRequest;
 import coilwright.system.WindMatchResult;
+import coilwright.web.CarriedDesign;
 import coilwright.web.Choice;
 import coilwright.web.Figure;
 import coilwright.web.FormBinder;
 import coilwright.web.FormPage;
 import coilwright.web.FormResult;
+import coilwright.web.NextSteps;
 import coilwright.web.NotFoundException;
 import coilwright.web.RecordBinder;
+import coilwright.web.pages.DesignEdit;
+import coilwright.web.units.Units;
 import io.javalin.http.Context;
 import java.util.HashMap;
+import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 
 /**
- * {@code /match/wind} and {@code /match/hydro}: a site-and-turbine form beside an example alternator design, and
- * on submit the matching chart, the matched power curve, the energy table and the cautions. A rejected form is
- * shown again by {@code ErrorMapping}; errors in the machine or its load land on the example choice.
+ * {@code /match/wind} and {@code /match/hydro}: a site-and-turbine form beside any alternator design, and on submit
+ * the matching chart, the matched power curve, the energy table and the cautions. The alternator is the design the
+ * page was handed ({@code ?design=}, {@link CarriedDesign}, kept in a hidden field) or an example
+ * ({@code ?example=slug}); its battery, rectifier and cables are the design form's own fields, editable here. A
+ * result can also be reached by GET with the form's fields in the query (the units switch and bookmarks lead
+ * there). A rejected form is shown again by {@code ErrorMapping}; errors in the machine land on the design.
  */
 public final class MatchPages {
+    /** A query field every full wind or hydro form has: its presence in a GET means "show the result". */
+    private static final String WIND_MARK = "rotor.diameterM";
+    private static final String HYDRO_MARK = "site.grossHeadM";
+    /** The hidden field holding the design's title, when it has one. */
+    private static final String TITLE = "title";
     private final MatchingService matching;
     private final ExampleCatalogue examples;
     private final FormBinder forms;
@@ -38,71 +51,152 @@ public final class MatchPages {
     }
 
     public void windForm(Context ctx) {
-        ctx.render("match-wind", model(starting(WindPageForm.defaults(example(ctx, "axial-wind-48v")))));
+        if (ctx.queryParam(WIND_MARK) != null) {
+            wind(ctx, fields(ctx.queryParamMap(), Units.of(ctx)));
+            return;
+        }
+        ctx.render("match-wind", model(starting(ctx, WindPageForm.defaults(), "axial-wind-48v"), Units.of(ctx)));
     }
 
     public void windResult(Context ctx) {
-        open(ctx, "match-wind");
-        WindPageForm f = forms.bind(ctx.formParamMap(), WindPageForm.class);
-        EvaluationRequest design = examples.require("example", f.example()).document().design();
+        wind(ctx, FormPage.posted(ctx));
+    }
+
+    private void wind(Context ctx, Map<String, String> typed) {
+        Units units = Units.of(ctx);
+        open(ctx, "match-wind", typed, units);
+        WindPageForm f = forms.bind(FormBinder.single(typed), WindPageForm.class);
+        EvaluationRequest design = DesignEdit.withLoad(alternator(typed), typed, units);
         WindMatchRequest req = new WindMatchRequest(design.alternator(), design.load(), f.rotor().toRotor(), f.site(),
                 f.wind(), 25.0);
         WindMatchResult result = matching.wind(req);
-        ctx.render("match-wind", resultModel(ctx, result, MatchSummary.wind(result), Map.of(
+        Map<String, Object> model = resultModel(ctx.path(), typed, units, design, result, MatchSummary.wind(result), Map.of(
                 "matchingChart", MatchCharts.windMatching(req.rotor(), result),
-                "powerChart", MatchCharts.windPowerCurve(result))));
+                "powerChart", MatchCharts.windPowerCurve(result)));
+        model.put("ratedChoices", RatedSpeed.wind(result));
+        ctx.render("match-wind", model);
     }
 
     public void hydroForm(Context ctx) {
-        ctx.render("match-hydro", model(starting(HydroPageForm.defaults(example(ctx, "radial-hydro-48v")))));
+        if (ctx.queryParam(HYDRO_MARK) != null) {
+            hydro(ctx, fields(ctx.queryParamMap(), Units.of(ctx)));
+            return;
+        }
+        ctx.render("match-hydro", model(starting(ctx, HydroPageForm.defaults(), "radial-hydro-48v"), Units.of(ctx)));
     }
 
     public void hydroResult(Context ctx) {
-        open(ctx, "match-hydro");
-        HydroPageForm f = forms.bind(ctx.formParamMap(), HydroPageForm.class);
-        EvaluationRequest design = examples.require("example", f.example()).document().design();
+        hydro(ctx, FormPage.posted(ctx));
+    }
+
+    private void hydro(Context ctx, Map<String, String> typed) {
+        Units units = Units.of(ctx);
+        open(ctx, "match-hydro", typed, units);
+        HydroPageForm f = forms.bind(FormBinder.single(typed), HydroPageForm.class);
+        EvaluationRequest design = DesignEdit.withLoad(alternator(typed), typed, units);
         HydroMatchResult result = matching.hydro(new HydroMatchRequest(design.alternator(), design.load(), f.site(),
                 f.penstock(), f.runner(), f.driveRatio(), f.drivetrainEfficiency(), f.waterTempC()));
-        ctx.render("match-hydro", resultModel(ctx, result, MatchSummary.hydro(result),
-                Map.of("matchingChart", MatchCharts.hydroMatching(result))));
+        Map<String, Object> model = resultModel(ctx.path(), typed, units, design, result, MatchSummary.hydro(result),
+                Map.of("matchingChart", MatchCharts.hydroMatching(result)));
+        model.put("ratedChoices", RatedSpeed.hydro(result));
+        ctx.render("match-hydro", model);
     }
 
-    private static FormResult starting(Record defaults) {
-        return FormResult.showing(FormBinder.flatten(defaults));
+    /** The starting form: the turbine's defaults, the design handed on (or an example) and its load fields. */
+    private FormResult starting(Context ctx, Record defaults, String fallbackExample) {
+        Units units = Units.of(ctx);
+        String carried = ctx.queryParam(CarriedDesign.FIELD);
+        ExampleCatalogue.Example example = carried != null ? null
+                : example(Optional.ofNullable(ctx.queryParam("example")).orElse(fallbackExample));
+        EvaluationRequest design = example == null ? CarriedDesign.decode(carried) : example.document().design();
+        Map<String, String> values = new LinkedHashMap<>(FormBinder.flatten(defaults));
+        values.put(TITLE, example == null ? Optional.ofNullable(ctx.queryParam(TITLE)).orElse("") : example.title());
+        values.putAll(loadFields(DesignEdit.formValues(design, units)));
+        values.put(CarriedDesign.FIELD, CarriedDesign.encode(design));
+        return FormResult.showing(values);
     }
 
-    /** The page with the form as posted, the result, its summary figures and its charts. */
-    private Map<String, Object> resultModel(Context ctx, Record result, List<Figure> summary, Map<String, String> charts) {
-        Map<String, Object> model = model(FormResult.showing(FormPage.posted(ctx)));
+    private static Map<String, String> loadFields(Map<String, String> designValues) {
+        Map<String, String> load = new LinkedHashMap<>();
+        designValues.forEach((k, v) -> {
+            if (k.equals("loadType") || k.startsWith("load.")) {
+                load.put(k, v);
+            }
+        });
+        return load;
+    }
+
+    /** The alternator of a posted form: the design it carries, or an example named by an older form. */
+    private EvaluationRequest alternator(Map<String, String> typed) {
+        String carried = typed.get(CarriedDesign.FIELD);
+        if ((carried == null || carried.isBlank()) && typed.get("example") != null) {
+            return examples.require("example", typed.get("example")).document().design();
+        }
+        return CarriedDesign.decode(carried);
+    }
+
+    /** The page with the form as posted, the result, its summary figures, charts and next steps. */
+    private Map<String, Object> resultModel(String path, Map<String, String> typed, Units units, EvaluationRequest design,
+                                            Record result, List<Figure> summary, Map<String, String> charts) {
+        Map<String, Object> model = withUnitsLink(model(FormResult.showing(typed), units), path, typed, units);
         model.put("result", result);
         model.put("summary", summary);
+        model.put("next", NextSteps.of(design, "Matched design"));
+        model.put("matchedDesign", CarriedDesign.encode(design));
         model.putAll(charts);
         return model;
     }
 
-    /** The example a form page starts from: the query's, else the page's default. */
-    private String example(Context ctx, String fallback) {
-        String slug = Optional.ofNullable(ctx.queryParam("example")).orElse(fallback);
+    private ExampleCatalogue.Example example(String slug) {
         return examples.find(slug).orElseThrow(() -> new NotFoundException("There is no example design named '" + slug
-                + "'. The examples are: " + String.join(", ", examples.slugs()) + ".")).slug();
+                + "'. The examples are: " + String.join(", ", examples.slugs()) + "."));
     }
 
-    /** The posted form, remembered so that a rejection shows it again; the machine and load are the example's. */
-    private void open(Context ctx, String template) {
-        FormPage.open(ctx, new FormPage(template, FormPage.posted(ctx), this::model, MatchPages::onForm));
+    /** The form as typed, remembered so that a rejection shows it again. */
+    private void open(Context ctx, String template, Map<String, String> typed, Units units) {
+        String path = ctx.path();
+        FormPage.open(ctx, new FormPage(template, typed, form -> withUnitsLink(model(form, units), path, typed, units),
+                MatchPages::onForm));
     }
 
+    private static Map<String, Object> withUnitsLink(Map<String, Object> model, String path, Map<String, String> typed,
+                                                     Units units) {
+        model.put("unitsLink", DesignEdit.unitsLink(path, typed, units));
+        return model;
+    }
+
+    /** The form field an error belongs to: the load's own fields, else the design for the rest of the machine. */
     static String onForm(String field) {
         return field.equals("alternator") || field.startsWith("alternator.") || field.equals("load")
-                || field.startsWith("load.") ? "example" : field;
+                ? CarriedDesign.FIELD : field;
     }
 
-    private Map<String, Object> model(FormResult form) {
-        Map<String, Object> m = new HashMap<>();
+    private Map<String, Object> model(FormResult form, Units units) {
+        Map<String, Object> m = new HashMap<>(DesignEdit.loadModel(units));
         m.put("form", form);
         m.put("examples", examples.all().stream().map(e -> new Choice(e.slug(), e.title())).toList());
         m.put("runnerKinds", Choice.names(RunnerKind.values()));
-        examples.find(form.value("example")).ifPresent(e -> m.put("design", e.document()));
+        String carried = form.value(CarriedDesign.FIELD);
+        if (!carried.isBlank()) {
+            try {
+                EvaluationRequest design = CarriedDesign.decode(carried);
+                m.put("machine", DesignEdit.describe(design));
+                m.put("changeLink", CarriedDesign.link("/design/new", design));
+            } catch (coilwright.validation.InvalidInputException e) {
+                m.put("machine", "the design handed to this page cannot be read");
+            }
+        }
         return m;
+    }
+
+    /** A form in a query, its load fields converted from the units they were typed in. */
+    private static Map<String, String> fields(Map<String, List<String>> query, Units units) {
+        Map<String, String> typed = new LinkedHashMap<>();
+        query.forEach((k, v) -> {
+            if (!k.equals(Units.PARAM)) {
+                typed.put(k, v.isEmpty() ? "" : v.get(0).trim());
+            }
+        });
+        return new LinkedHashMap<>(DesignEdit.typedIn(typed, units));
     }
 }

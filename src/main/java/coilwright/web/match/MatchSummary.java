@@ -3,6 +3,7 @@ package coilwright.web.match;
 import coilwright.system.HydroMatchResult;
 import coilwright.system.WindMatchResult;
 import coilwright.web.Figure;
+import coilwright.web.Words;
 import java.util.List;
 import java.util.Locale;
 
@@ -41,7 +42,7 @@ final class MatchSummary {
                 Figure.of("net-head", "Net head", f("%.2f m", p.netHeadM()), f("penstock efficiency %.1f %%; "
                                 + "Hazen-Williams friction %.2f m against Darcy-Weisbach %.2f m",
                         100 * p.penstockEfficiency(), p.hazenWilliamsFrictionLossM(), p.frictionLossM())),
-                Figure.of("runner", "Runner", r.runnerKind().name() + f(", %.0f mm", 1000 * r.runnerDiameterM()),
+                Figure.of("runner", "Runner", Words.of(r.runnerKind()) + f(", %.0f mm", 1000 * r.runnerDiameterM()),
                         f("best speed %.0f rpm", r.optimumRunnerSpeedRpm())),
                 Figure.of("power", "Hydraulic / peak shaft power", f("%.0f W / %.0f W", r.hydraulicPowerW(),
                         r.peakShaftPowerW()), ""),

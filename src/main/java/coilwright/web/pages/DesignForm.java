@@ -27,7 +27,7 @@ import java.util.regex.Pattern;
  */
 final class DesignForm {
     static final String LOAD_TYPE = "loadType";
-    private static final Pattern NUMBER = Pattern.compile("[-+]?(\\d+\\.?\\d*|\\.\\d+)([eE][-+]?\\d+)?");
+    static final Pattern NUMBER = Pattern.compile("[-+]?(\\d+\\.?\\d*|\\.\\d+)([eE][-+]?\\d+)?");
     private static final Map<String, Class<?>> LOADS = Map.of("BATTERY", BatteryLoad.class, "RESISTOR", ResistiveLoad.class);
     private final RecordBinder records = new RecordBinder(Json.mapper());
     private final FormBinder forms = new FormBinder(records);

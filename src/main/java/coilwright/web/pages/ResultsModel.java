@@ -3,6 +3,8 @@ package coilwright.web.pages;
 import coilwright.safety.Caution;
 import coilwright.system.AlternatorEvaluation;
 import coilwright.system.EvaluationRequest;
+import coilwright.web.CarriedDesign;
+import coilwright.web.NextSteps;
 import coilwright.web.units.Shown;
 import coilwright.web.units.Units;
 import java.util.HashMap;
@@ -16,14 +18,13 @@ final class ResultsModel {
     }
 
     /**
-     * @param title    page heading
-     * @param editLink where "change this design" leads (the form pre-filled with this design)
+     * @param title page heading, and the title offered when the design is saved
      */
-    static Map<String, Object> of(String title, String editLink, EvaluationRequest request, AlternatorEvaluation e,
-                                  Units units) {
+    static Map<String, Object> of(String title, EvaluationRequest request, AlternatorEvaluation e, Units units) {
         Map<String, Object> m = new HashMap<>();
         m.put("heading", title);
-        m.put("editLink", editLink);
+        m.put("next", NextSteps.of(request, title));
+        m.put("unitsLink", CarriedDesign.link("/design/results", request));
         m.put("summary", Summary.of(e, request, units));
         m.put("cautions", e.cautions().stream()
                 .sorted(java.util.Comparator.comparing((Caution c) -> c.severity() != Caution.Severity.DANGER)).toList());

@@ -15,7 +15,8 @@ import org.thymeleaf.templateresolver.ClassLoaderTemplateResolver;
 /**
  * Javalin's {@link FileRenderer} over Thymeleaf: {@code ctx.render("home", model)} renders the classpath
  * template {@code templates/home.html}. Every page also gets {@code path} (the request path, for the nav),
- * {@code units} (the request's {@link Units}) and {@code fmt} (numbers in those units, {@link Fmt}).
+ * {@code here} (the address the units switch adds its choice to, {@link UnitsSwitch}; a model's own
+ * {@code unitsLink} wins), {@code units} (the request's {@link Units}) and {@code fmt} (numbers in those units, {@link Fmt}).
  */
 public final class ThymeleafRenderer implements FileRenderer {
     private final TemplateEngine engine = new TemplateEngine();
@@ -44,6 +45,8 @@ public final class ThymeleafRenderer implements FileRenderer {
         org.thymeleaf.context.Context page = new org.thymeleaf.context.Context(Locale.ROOT);
         page.setVariables(new java.util.HashMap<>(model));
         page.setVariable("path", ctx.path());
+        page.setVariable("here", UnitsSwitch.here(ctx));
+        page.setVariable("words", coilwright.web.Words.INSTANCE);
         Units units = Units.of(ctx);
         page.setVariable("units", units);
         page.setVariable("fmt", new Fmt(units));

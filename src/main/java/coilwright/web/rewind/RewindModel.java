@@ -6,6 +6,7 @@ import coilwright.service.RewindService;
 import coilwright.service.StatorOptionsRequest;
 import coilwright.service.StatorOptionsResult;
 import coilwright.web.Choice;
+import java.util.List;
 import coilwright.web.FormResult;
 import coilwright.winding.WindingSpec;
 import java.util.HashMap;
@@ -29,10 +30,10 @@ final class RewindModel {
         model.put("poleLinks", new PoleLinks());
         model.put("layers", Choice.LAYERS);
         model.put("rankings", RANKINGS);
-        model.put("connections", Choice.of("STAR", "DELTA"));
-        model.put("gauges", Choice.of("AWG", "METRIC"));
-        model.put("windowKinds", Choice.of("AIR_CORED", "SLOTTED"));
-        model.put("targetKinds", Choice.of("BATTERY_CUT_IN", "LINE_VOLTAGE"));
+        model.put("connections", Choice.words("STAR", "DELTA"));
+        model.put("gauges", Choice.words("AWG", "METRIC"));
+        model.put("windowKinds", List.of(new Choice("AIR_CORED", "Air-cored (no slots)"), new Choice("SLOTTED", "In slots")));
+        model.put("targetKinds", Choice.labelled(targets()));
         return model;
     }
 
@@ -52,5 +53,12 @@ final class RewindModel {
         var m = request.machine();
         return service.statorOptions(new StatorOptionsRequest(m.slots(), m.phases(), m.layers(), 2,
                 Math.max(2, Math.min(WindingSpec.MAX_POLES, 2 * m.slots())), java.util.Optional.empty()));
+    }
+
+    private static java.util.Map<String, String> targets() {
+        java.util.Map<String, String> m = new java.util.LinkedHashMap<>();
+        m.put("BATTERY_CUT_IN", "Start charging a battery at a speed");
+        m.put("LINE_VOLTAGE", "A line voltage at a speed");
+        return m;
     }
 }

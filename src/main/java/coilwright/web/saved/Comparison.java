@@ -33,12 +33,38 @@ record Comparison(Side a, Side b, List<TreeDiff.Difference> inputDifferences, Li
 
     /** One key result of each side; a side without the figure has {@code null}. */
     record FigurePair(String key, String label, String unit, Double a, Double b, boolean differs) {
+        /** Pages show a fraction ("1") as a percentage. */
+        private double scale() {
+            return unit.equals("1") ? 100 : 1;
+        }
+
+        public String shownUnit() {
+            return ResultView.shownUnit(unit);
+        }
+
         public String aText() {
-            return a == null ? "—" : ResultFigures.format(a);
+            return a == null ? "—" : ResultFigures.format(scale() * a);
         }
 
         public String bText() {
-            return b == null ? "—" : ResultFigures.format(b);
+            return b == null ? "—" : ResultFigures.format(scale() * b);
+        }
+
+        /** Second minus first, in the shown unit, signed; a dash when either is missing. */
+        public String differenceText() {
+            if (a == null || b == null) {
+                return "—";
+            }
+            double d = scale() * (b - a);
+            return d == 0 ? "0" : (d > 0 ? "+" : "") + ResultFigures.format(d);
+        }
+
+        /** The change relative to the first, signed, in %; a dash when the first is missing or zero. */
+        public String changeText() {
+            if (a == null || b == null || a == 0) {
+                return "—";
+            }
+            return String.format(java.util.Locale.ROOT, "%+.1f %%", 100 * (b - a) / Math.abs(a));
         }
     }
 

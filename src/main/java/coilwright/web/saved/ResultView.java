@@ -1,5 +1,6 @@
 package coilwright.web.saved;
 
+import coilwright.web.Words;
 import com.fasterxml.jackson.databind.JsonNode;
 
 import java.util.ArrayList;
@@ -23,7 +24,9 @@ record ResultView(List<Row> summary, List<CautionRow> cautions, List<String> war
         for (ResultFigures.Figure f : ResultFigures.KEY) {
             JsonNode n = results.at(f.pointer());
             if (!n.isMissingNode()) {
-                summary.add(new Row(f.label(), ResultFigures.format(n), f.unit()));
+                boolean fraction = f.unit().equals(FRACTION);
+                summary.add(new Row(f.label(), fraction && n.isNumber() ? ResultFigures.format(100 * n.doubleValue())
+                        : ResultFigures.format(n), shownUnit(f.unit())));
             }
         }
         List<CautionRow> cautions = new ArrayList<>();
@@ -37,8 +40,31 @@ record ResultView(List<Row> summary, List<CautionRow> cautions, List<String> war
                 .filter(c -> ResultFigures.PAGE_COLUMNS.contains(c.field())).toList();
         List<List<String>> rows = new ArrayList<>();
         for (JsonNode p : results.path("points")) {
-            rows.add(columns.stream().map(c -> ResultFigures.format(p.get(c.field()))).toList());
+            rows.add(columns.stream().map(c -> cell(c, p.get(c.field()))).toList());
         }
-        return new ResultView(summary, cautions, warnings, columns.stream().map(ResultFigures.Column::header).toList(), rows);
+        return new ResultView(summary, cautions, warnings, columns.stream().map(ResultView::heading).toList(), rows);
+    }
+
+    /** The unit of a dimensionless fraction in the snapshot's figures: pages show it as a percentage. */
+    private static final String FRACTION = "1";
+
+    private static String cell(ResultFigures.Column c, JsonNode n) {
+        if (n != null && n.isNumber() && c.unit().equals(FRACTION)) {
+            return ResultFigures.format(100 * n.doubleValue());
+        }
+        return n != null && n.isTextual() ? Words.of(n.asText()) : ResultFigures.format(n);
+    }
+
+    private static String heading(ResultFigures.Column c) {
+        return c.unit().isEmpty() ? c.heading() : c.heading() + " (" + shownUnit(c.unit()) + ")";
+    }
+
+    /** A snapshot's ASCII unit as a page shows it: "N·m", "A/mm²", "Ω", "%" for a fraction. */
+    static String shownUnit(String unit) {
+        return switch (unit) {
+            case FRACTION -> "%";
+            case "ohm" -> "Ω";
+            default -> Words.inText(unit);
+        };
     }
 }

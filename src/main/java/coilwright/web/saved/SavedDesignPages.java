@@ -5,7 +5,12 @@ import coilwright.service.DesignLibrary;
 import coilwright.service.Recomputation;
 import coilwright.service.SaveReceipt;
 import coilwright.service.SavedRevision;
+import coilwright.system.EvaluationRequest;
+import coilwright.web.CarriedDesign;
 import coilwright.web.Json;
+import coilwright.web.NextSteps;
+import coilwright.web.pages.DesignInputs;
+import coilwright.web.units.Units;
 import coilwright.web.NotFoundException;
 import coilwright.web.RecordBinder;
 import com.fasterxml.jackson.core.JsonProcessingException;
@@ -18,6 +23,7 @@ import java.io.UncheckedIOException;
 import java.nio.charset.StandardCharsets;
 import java.util.HashMap;
 import java.util.Map;
+import java.util.Optional;
 
 /** The pages of saved designs. Title and notes are user text: templates show them with th:text only. */
 public final class SavedDesignPages {
@@ -32,11 +38,39 @@ public final class SavedDesignPages {
         ctx.render("saved-new", Map.of("title", "Save or import a design"));
     }
 
+    /**
+     * Saves a design file (uploaded or pasted), or the design a results page hands on ({@code design},
+     * {@link CarriedDesign}) with the optional {@code title} and {@code notes} typed beside it. The answer shows the
+     * full permanent link and, once, the edit token.
+     */
     public void save(Context ctx) {
-        SaveReceipt outcome = library.save(binder.bind(submitted(ctx), DesignDocument.class));
+        DesignDocument document = ctx.formParam(CarriedDesign.FIELD) != null ? carried(ctx)
+                : binder.bind(submitted(ctx), DesignDocument.class);
+        SaveReceipt outcome = library.save(document);
         outcome.editToken().ifPresent(token -> EditTokenHeader.keepPrivate(ctx));
+        String link = "/d/" + outcome.designId();
         ctx.status(outcome.created() ? 201 : 200).render("saved-created", Map.of("outcome", outcome,
-                "rev", library.revision(outcome.revisionId())));
+                "rev", library.revision(outcome.revisionId()), "fullLink", absolute(ctx, link), "unitsLink", link));
+    }
+
+    /** The design a page handed on, under the title typed (or a plain one naming the machine) and the notes typed. */
+    private static DesignDocument carried(Context ctx) {
+        EvaluationRequest design = CarriedDesign.decode(ctx.formParam(CarriedDesign.FIELD));
+        String title = Optional.ofNullable(ctx.formParam("title")).map(String::strip).filter(t -> !t.isEmpty())
+                .orElseGet(() -> defaultTitle(design));
+        String notes = Optional.ofNullable(ctx.formParam("notes")).map(String::strip).orElse("");
+        return new DesignDocument(DesignDocument.SCHEMA_VERSION, title, notes, design);
+    }
+
+    static String defaultTitle(EvaluationRequest design) {
+        var w = design.alternator().winding();
+        return w.slots() + "-slot " + w.poles() + "-pole alternator, " + design.alternator().turnsPerCoil()
+                + " turns per coil";
+    }
+
+    /** The link as a client would type it: scheme and host of this request. */
+    private static String absolute(Context ctx, String path) {
+        return ctx.scheme() + "://" + ctx.host() + path;
     }
 
     public void latest(Context ctx) {
@@ -53,18 +87,8 @@ public final class SavedDesignPages {
 
     public void print(Context ctx) {
         SavedRevision r = ofDesign(ctx);
-        ctx.render("saved-print", Map.of("rev", r, "results", ResultView.of(library.tree(r.resultJson()))));
-    }
-
-    public void reviseForm(Context ctx) {
-        SavedRevision r = library.latest(ctx.pathParam("designId"));
-        ctx.render("saved-revise", Map.of("rev", r, "document", pretty(library.document(r))));
-    }
-
-    public void revise(Context ctx) {
-        DesignDocument doc = binder.bind(submitted(ctx), DesignDocument.class);
-        SaveReceipt o = library.revise(ctx.pathParam("designId"), ctx.formParam("editToken"), doc);
-        ctx.redirect("/d/" + o.designId() + "/r/" + o.revisionId(), io.javalin.http.HttpStatus.SEE_OTHER);
+        ctx.render("saved-print", Map.of("rev", r, "results", ResultView.of(library.tree(r.resultJson())),
+                "inputs", DesignInputs.of(library.document(r).design(), Units.of(ctx))));
     }
 
     public void compare(Context ctx) {
@@ -88,6 +112,9 @@ public final class SavedDesignPages {
         model.put("history", library.history(r.designId()));
         model.put("again", again);
         model.put("recomputedView", recomputedView);
+        var design = library.document(r).design();
+        model.put("next", NextSteps.saved(design, r.title(), r.designId()));
+        model.put("inputs", DesignInputs.of(design, Units.of(ctx)));
         model.put("results", ResultView.of(recomputedView && again.results().isPresent() ? again.results().get()
                 : library.tree(r.resultJson())));
         ctx.render("saved-revision", model);
@@ -121,11 +148,4 @@ public final class SavedDesignPages {
         return type != null && type.toLowerCase(java.util.Locale.ROOT).startsWith("multipart/");
     }
 
-    private static String pretty(DesignDocument doc) {
-        try {
-            return Json.mapper().writerWithDefaultPrettyPrinter().writeValueAsString(doc);
-        } catch (JsonProcessingException e) {
-            throw new IllegalStateException("cannot write the design file: " + e.getOriginalMessage(), e);
-        }
-    }
 }

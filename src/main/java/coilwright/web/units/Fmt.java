@@ -76,6 +76,12 @@ public final class Fmt {
         return shown(Shown.MM, metres, 3);
     }
 
+    /** A moment as people read it, to the minute in UTC: "2026-12-03 17:36 UTC". */
+    public String when(java.time.Instant t) {
+        return t == null ? NONE : java.time.format.DateTimeFormatter.ofPattern("yyyy-MM-dd HH:mm 'UTC'", Locale.ROOT)
+                .withZone(java.time.ZoneOffset.UTC).format(t);
+    }
+
     /** A conductor's copper area given in m² shown in mm² (SI) or square inches (imperial). */
     public String area(double squareMetres) {
         return shown(Shown.WIRE_AREA, squareMetres, 3);

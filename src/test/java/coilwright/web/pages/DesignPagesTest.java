@@ -110,8 +110,8 @@ class DesignPagesTest {
     @Test
     void danger_cautions_come_first() {
         List<String> severities = post(defaultForm(), 200).all(".cautions-list .caution .caution-title strong").eachText();
-        List<String> dangerFirst = severities.stream().sorted(java.util.Comparator.comparing(s -> !s.equals("DANGER"))).toList();
-        assertTrue(severities.contains("DANGER"), severities.toString());
+        List<String> dangerFirst = severities.stream().sorted(java.util.Comparator.comparing(s -> !s.equals("Danger"))).toList();
+        assertTrue(severities.contains("Danger"), severities.toString());
         assertEquals(dangerFirst, severities);
     }
 
@@ -156,7 +156,7 @@ class DesignPagesTest {
         Map<String, String> f = defaultForm();
         f.put("topology", "LINEAR");
         Html page = post(f, 400);
-        assertEquals("topology = \"LINEAR\": must be one of RADIAL_INNER, RADIAL_OUTER, AXIAL_DUAL", page.error("topology"));
+        assertEquals("topology = \"LINEAR\": must be one of radial inner, radial outer, axial dual", page.error("topology"));
     }
 
     @Test

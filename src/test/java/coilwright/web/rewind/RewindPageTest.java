@@ -149,7 +149,7 @@ class RewindPageTest {
         Html page = Html.of(given().queryParam("units", "imperial").formParams(f).post("/rewind").then().statusCode(200)
                 .extract().response());
         assertTrue(page.all("#derived li").eachText().stream().anyMatch(d -> d.contains(
-                "from 1.45000 Ohm between line terminals (star: R_ph = R_LL / 2) at 20.0 C")));
+                "from 1.45000 Ω between line terminals (star: R_ph = R line-to-line / 2) at 20.0 °C")));
         assertEquals("°F", page.unit("target.windingTemperatureC"));
     }
 

@@ -101,9 +101,9 @@ class SavedDesignPagesTest {
         Response r = given().formParam("document", SavedFixtures.document("Saved from a form")).post("/saved");
         r.then().statusCode(201).contentType(startsWith("text/html"))
                 .header("Cache-Control", "no-store").header("Referrer-Policy", "no-referrer")
-                .body(containsString("Copy it now and keep it safe."))
+                .body(containsString("Keep this token now: it is shown only this once"))
                 .body(containsString("id=\"edit-token\""));
-        Matcher m = Pattern.compile("<code id=\"edit-token\">([A-Za-z0-9_-]{43})</code>").matcher(r.asString());
+        Matcher m = Pattern.compile("id=\"edit-token\" class=\"token\" type=\"text\" readonly value=\"([A-Za-z0-9_-]{43})\"").matcher(r.asString());
         assertTrue(m.find(), r.asString());
         Response again = given().formParam("document", SavedFixtures.document("Saved from a form")).post("/saved");
         again.then().statusCode(201).body(containsString("id=\"edit-token\"")).body(not(containsString(m.group(1))));
