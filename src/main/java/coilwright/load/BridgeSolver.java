@@ -1,5 +1,11 @@
 package coilwright.load;
 
+import coilwright.validation.SolverFailedException;
+import org.apache.commons.math3.exception.MathIllegalArgumentException;
+import org.apache.commons.math3.exception.MathIllegalStateException;
+
+import java.util.Locale;
+
 /**
  * Periodic steady state of a diode bridge charging a battery from a sinusoidal source behind R and L.
  * <p>
@@ -13,12 +19,33 @@ package coilwright.load;
  * the most diodes conduct (where the map is smooth). Shooting for periodic solutions of switched circuits
  * follows Aprille and Trick (1972); the exact piecewise solution is the classical treatment of the bridge
  * in, e.g., Mohan, Undeland and Robbins, "Power Electronics", 2003, ch. 5.
+ * <p>
+ * Safeguards, in order: the warm start (when a sweep gives one); the cold start above; then Newton with a fresh
+ * finite-difference Jacobian at every step and a longer line search (damped Newton) after more fixed-point sweeps;
+ * then the plain fixed-point sweeps themselves, which are the circuit's own transient and contract with the factor
+ * q = exp(-R T_s / L) per interval (the branch energy L |i - i'|^2 / 2 of two solutions decays at least at the rate
+ * 2R/L: resistors dissipate and ideal diodes and the battery are monotone), stopped when the contraction bound
+ * q / (1 - q) |dx| on the remaining error is met. Every convergence test is relative to the current magnitudes
+ * (the state, and the coefficient sums of the waveforms, whose rounding noise limits the residual). Only when all
+ * of these give up does the solver report a {@link SolverFailedException} naming the circuit.
  */
 public final class BridgeSolver {
+    /** Smallest wL/(R + R_dc) and largest wL/R the solver takes (see checkResolvable). */
+    public static final double MIN_REACTANCE_RATIO = 1e-8;
+    public static final double MAX_REACTANCE_RATIO = 1e6;
     private static final int FIXED_POINT_SWEEPS = 2;
     private static final int MAX_NEWTON = 60;
     private static final double NEWTON_TOLERANCE = 1e-13;
     private static final double ACCEPT_TOLERANCE = 1e-9;
+    /** Rounding noise of a residual relative to the coefficient sums of the sweep's waveforms. */
+    private static final double NOISE_TOLERANCE = 1e-13;
+    /** Fixed-point sweeps before the damped Newton fallback. */
+    private static final int FALLBACK_SWEEPS = 12;
+    private static final int MAX_DAMPED_NEWTON = 80;
+    /** Most fixed-point sweeps of the last fallback. */
+    private static final int MAX_TRANSIENT_SWEEPS = 20_000;
+    /** Remaining-error bound at which the fixed-point sweeps stop, relative to the current scale. */
+    private static final double TRANSIENT_TOLERANCE = 1e-11;
 
     private BridgeSolver() {
     }
@@ -31,7 +58,8 @@ public final class BridgeSolver {
      *         (single-phase) does not exceed Vb + 2 Vd, or exceeds it so little that the window where it does is
      *         narrower than {@link BridgeModel#MIN_WINDOW_RAD} on each side of the peak (a relative margin below
      *         5e-7, where the true DC current is below 1e-11 of the short-circuit current)
-     * @throws IllegalStateException if the periodic solution cannot be found (not expected for valid input)
+     * @throws SolverFailedException if no method finds the periodic solution (not expected for valid input); the
+     *                               message names the circuit
      */
     public static BridgeOperatingPoint solve(BridgeCircuit circuit) {
         return solve(circuit, null);
@@ -60,8 +88,49 @@ public final class BridgeSolver {
             }
             return BridgeResults.belowCutIn(circuit);
         }
+        checkResolvable(circuit);
         BridgeModel md = new BridgeModel(circuit);
-        return BridgeResults.assemble(circuit, md, periodic(md, warm));
+        try {
+            return BridgeResults.assemble(circuit, md, periodic(md, warm));
+        } catch (NoPeriodicSolution | MathIllegalStateException | MathIllegalArgumentException e) {
+            if (warm != null) {
+                warm.forget();
+            }
+            throw failure(circuit, e);
+        }
+    }
+
+    /**
+     * Refuses a circuit whose time constants the waveforms cannot carry in double precision: the reactance wL must
+     * be at most {@link #MAX_REACTANCE_RATIO} times the AC-side resistance R (else the waveforms are differences of
+     * terms up to that many times the currents they describe) and at least {@link #MIN_REACTANCE_RATIO} times the
+     * loop resistance R + R_dc (else the DC mode decays that many times faster than the electrical period and its
+     * events crowd within rounding). Real windings lie between about 0.01 and 100; an ideal bridge feeding a load
+     * resistor (wL/(R + R_dc) near 1e-7) is still taken.
+     */
+    private static void checkResolvable(BridgeCircuit c) {
+        double r = c.windingResistanceOhm() + c.acCableResistanceOhm();
+        double x = 2 * Math.PI * c.frequencyHz() * c.inductanceH();
+        double loop = r + c.dcResistanceOhm();
+        if (!(x <= MAX_REACTANCE_RATIO * r && x >= MIN_REACTANCE_RATIO * loop)) {
+            throw new SolverFailedException("phaseInductanceH", String.format(Locale.ROOT, "At %.6g Hz the winding's "
+                            + "reactance (%.4g Ohm per phase) is %.3g times its resistance with the AC cable (%.4g Ohm) and "
+                            + "%.3g times the loop resistance with the DC side (%.4g Ohm): the rectifier model resolves "
+                            + "reactance from %.0e times the loop resistance to %.0e times the AC-side resistance. Check "
+                            + "the phase inductance, the resistances and the speed range.", c.frequencyHz(), x, x / r, r,
+                    x / loop, loop, MIN_REACTANCE_RATIO, MAX_REACTANCE_RATIO));
+        }
+    }
+
+    /** The typed failure for a circuit, in words a user can act on. */
+    private static SolverFailedException failure(BridgeCircuit c, RuntimeException cause) {
+        return new SolverFailedException("", String.format(Locale.ROOT, "The rectifier's periodic steady state could "
+                        + "not be found at %.6g Hz (phase EMF %.6g V rms, %.4g Ohm and %.4g H per phase, battery plus two "
+                        + "diode drops %.4g V, %s): %s. A slightly different speed range, battery voltage or cable "
+                        + "usually avoids it; please report the design if it does not.", c.frequencyHz(),
+                c.emfPhaseRmsV(), c.windingResistanceOhm() + c.acCableResistanceOhm(), c.inductanceH(), c.thresholdV(),
+                c.type() == BridgeType.THREE_PHASE_BRIDGE ? "three-phase bridge" : "single-phase bridge",
+                cause.getMessage()), cause);
     }
 
     static BridgeSweep periodic(BridgeModel md) {
@@ -75,9 +144,35 @@ public final class BridgeSolver {
                 return fast;
             }
         }
+        RuntimeException first;
+        try {
+            return coldNewton(md, warm, FIXED_POINT_SWEEPS, false);
+        } catch (NoPeriodicSolution | MathIllegalStateException | MathIllegalArgumentException e) {
+            first = e;
+        }
+        if (warm != null) {
+            warm.forget();
+        }
+        try {
+            return coldNewton(md, null, FALLBACK_SWEEPS, true);
+        } catch (NoPeriodicSolution | MathIllegalStateException | MathIllegalArgumentException e) {
+            // the transient below needs neither a Jacobian nor a smooth map
+        }
+        try {
+            return transient_(md);
+        } catch (NoPeriodicSolution | MathIllegalStateException | MathIllegalArgumentException e) {
+            throw new NoPeriodicSolution(first.getMessage() + "; damped Newton and " + e.getMessage());
+        }
+    }
+
+    /**
+     * Fixed-point sweeps from rest, then Newton anchored inside the busiest segment. With {@code damped}, the
+     * Jacobian is recomputed at every step (no chord, no Broyden update) and the line search goes further.
+     */
+    private static BridgeSweep coldNewton(BridgeModel md, BridgeWarmStart warm, int sweeps, boolean damped) {
         int m = md.m;
         BridgeSweep sw = new BridgeSweep(md, 0, new double[m]);
-        for (int it = 0; it < FIXED_POINT_SWEEPS; it++) {
+        for (int it = 0; it < sweeps; it++) {
             int off = longestOff(sw);
             if (off >= 0) {
                 BridgeSegment s = sw.segments.get(off);
@@ -100,6 +195,7 @@ public final class BridgeSolver {
         double[] xa = new double[md.m];
         anchor.currentsAt(half, xa);
         Newton nt = new Newton(md, anchor.t0 + half, java.util.Arrays.copyOf(xa, md.m - 1), null);
+        nt.damped = damped;
         BridgeSweep result = nt.solve();
         if (warm != null) {
             if (longestOff(result) < 0) {
@@ -109,6 +205,37 @@ public final class BridgeSolver {
             }
         }
         return result;
+    }
+
+    /**
+     * The last fallback: the circuit's own transient, one symmetry interval after another from rest, until the
+     * contraction bound q / (1 - q) |x_next - x| on the distance to the periodic state falls below
+     * {@link #TRANSIENT_TOLERANCE} of the current scale.
+     */
+    private static BridgeSweep transient_(BridgeModel md) {
+        double q = Math.exp(-md.r * md.sweepS / md.l);
+        double factor = q / -Math.expm1(-md.r * md.sweepS / md.l);
+        BridgeSweep sw = new BridgeSweep(md, 0, new double[md.m]);
+        double[] x = new double[md.m];
+        double[] next = new double[md.m];
+        for (int it = 0; it < MAX_TRANSIENT_SWEEPS; it++) {
+            md.unshift(sw.end, next);
+            double step = 0;
+            double size = 0;
+            for (int k = 0; k < md.m; k++) {
+                step += (next[k] - x[k]) * (next[k] - x[k]);
+                size = Math.max(size, Math.abs(next[k]));
+            }
+            double tolerance = Math.max(TRANSIENT_TOLERANCE * Math.max(size, 1e-3 * md.currentScaleA()),
+                    NOISE_TOLERANCE * sw.coefficientMagnitudeA);
+            if (factor * Math.sqrt(step) <= tolerance) {
+                return sw;
+            }
+            System.arraycopy(next, 0, x, 0, md.m);
+            sw = new BridgeSweep(md, 0, x.clone());
+        }
+        throw new NoPeriodicSolution("the transient had not settled after " + MAX_TRANSIENT_SWEEPS
+                + " intervals (contraction factor " + q + ")");
     }
 
     /** Newton from the predicted state at the last solution's anchor angle; null when that does not work out. */
@@ -126,7 +253,7 @@ public final class BridgeSolver {
             }
             warm.remember(result, md.w, nt.jac);
             return result;
-        } catch (IllegalStateException e) {
+        } catch (NoPeriodicSolution | MathIllegalStateException | MathIllegalArgumentException e) {
             return null;
         }
     }
@@ -150,6 +277,8 @@ public final class BridgeSolver {
         private final double ta;
         private final double[] y0;
         double[][] jac;
+        /** Fresh Jacobian at every step and a longer line search (the fallback). */
+        boolean damped;
 
         Newton(BridgeModel md, double ta, double[] y0, double[][] jac) {
             this.md = md;
@@ -163,18 +292,24 @@ public final class BridgeSolver {
             double[] y = y0;
             double scale = md.currentScaleA();
             Residual r = new Residual(md, ta, y);
-            for (int it = 0; it < MAX_NEWTON; it++) {
+            int maxSteps = damped ? MAX_DAMPED_NEWTON : MAX_NEWTON;
+            double minLambda = damped ? 1e-6 : 1e-3;
+            for (int it = 0; it < maxSteps; it++) {
                 double size = Math.max(norm(y), 1e-3 * scale);
-                if (norm(r.value) <= NEWTON_TOLERANCE * size
-                        || it >= MAX_NEWTON / 2 && norm(r.value) <= ACCEPT_TOLERANCE * size) {
+                double noise = NOISE_TOLERANCE * r.sweep.coefficientMagnitudeA;
+                if (norm(r.value) <= Math.max(NEWTON_TOLERANCE * size, noise)
+                        || it >= maxSteps / 2 && norm(r.value) <= Math.max(ACCEPT_TOLERANCE * size, noise)) {
                     return r.sweep;
                 }
-                if (jac == null) {
+                if (jac == null || damped) {
                     jac = jacobian(md, ta, y, r, size);
                 }
                 double[] step = solveSmall(jac, r.value);
+                if (!finite(step)) {
+                    throw new NoPeriodicSolution("singular Newton matrix (residual " + norm(r.value) + " A)");
+                }
                 Residual next = null;
-                for (double lambda = 1; lambda > 1e-3; lambda /= 2) {
+                for (double lambda = 1; lambda > minLambda; lambda /= 2) {
                     double[] yt = y.clone();
                     for (int i = 0; i < n; i++) {
                         yt[i] -= lambda * step[i];
@@ -186,7 +321,7 @@ public final class BridgeSolver {
                     }
                 }
                 if (next == null) {
-                    if (norm(r.value) <= ACCEPT_TOLERANCE * size) {
+                    if (norm(r.value) <= Math.max(ACCEPT_TOLERANCE * size, noise)) {
                         return r.sweep;
                     }
                     double[] fp = new double[md.m];
@@ -201,7 +336,7 @@ public final class BridgeSolver {
                 r = next;
                 y = next.y;
             }
-            throw new IllegalStateException("bridge solver: no periodic solution after " + MAX_NEWTON
+            throw new NoPeriodicSolution("no periodic solution after " + maxSteps
                     + " Newton steps (residual " + norm(r.value) + " A)");
         }
     }
@@ -280,6 +415,15 @@ public final class BridgeSolver {
         }
         double det = a[0][0] * a[1][1] - a[0][1] * a[1][0];
         return new double[] {(b[0] * a[1][1] - a[0][1] * b[1]) / det, (a[0][0] * b[1] - a[1][0] * b[0]) / det};
+    }
+
+    private static boolean finite(double[] v) {
+        for (double d : v) {
+            if (!Double.isFinite(d)) {
+                return false;
+            }
+        }
+        return true;
     }
 
     private static double norm(double[] v) {

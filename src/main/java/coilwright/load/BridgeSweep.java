@@ -45,6 +45,11 @@ final class BridgeSweep {
     final List<BridgePulse> pulses = new ArrayList<>(8);
     final double[] end;
     final double t0;
+    /**
+     * Largest sum of coefficient magnitudes of a branch current over the segments, A: the rounding noise of every
+     * current in this sweep is a small multiple of 1e-16 of it (the terms of a waveform can cancel to far less).
+     */
+    double coefficientMagnitudeA;
 
     private final BridgeModel md;
     private final double tolV;
@@ -93,7 +98,7 @@ final class BridgeSweep {
         BridgeSegment seg = settle(sign, t, x);
         for (int events = 0; ; events++) {
             if (events > MAX_EVENTS) {
-                throw new IllegalStateException("bridge solver: more than " + MAX_EVENTS
+                throw new NoPeriodicSolution("more than " + MAX_EVENTS
                         + " switching events in one interval (w = " + md.w + " rad/s, V0 = " + md.v0 + " V)");
             }
             boolean found = seg.off() ? offEvent(t, tEnd - t) : findEvent(seg, tEnd - t);
@@ -159,6 +164,13 @@ final class BridgeSweep {
     }
 
     private void add(BridgeSegment seg, double d, BridgePulse pulse) {
+        for (double[] current : seg.current) {
+            double sum = 0;
+            for (double c : current) {
+                sum += Math.abs(c);
+            }
+            coefficientMagnitudeA = Math.max(coefficientMagnitudeA, sum);
+        }
         segments.add(seg);
         durations.add(d);
         pulses.add(pulse);
