@@ -40,6 +40,14 @@ public record AlternatorSpec(
         double measuredKeLineVPerRpm,
         double phaseInductanceH) {
 
+    /**
+     * Smallest measured line EMF constant, V/rpm: 1e-4 V/rpm gives 0.1 V at 1000 rpm, below any machine that
+     * charges a battery (the electrical frequency a speed implies would otherwise leave every physical range).
+     */
+    public static final double MIN_MEASURED_KE_V_PER_RPM = 1e-4;
+    /** Smallest entered phase inductance, H (1 uH: a few turns of an air-cored coil; common practice). */
+    public static final double MIN_PHASE_INDUCTANCE_H = 1e-6;
+
     public AlternatorSpec {
         Checks c = new Checks()
                 .present("winding", winding)
@@ -54,6 +62,15 @@ public record AlternatorSpec(
                 .range("magnetTempC", magnetTempC, -40, 250)
                 .range("measuredKeLineVPerRpm", measuredKeLineVPerRpm, 0, 100)
                 .range("phaseInductanceH", phaseInductanceH, 0, 10);
+        // 0 asks for the computed value; an entered one must be a machine's, not a rounding residue
+        if (measuredKeLineVPerRpm > 0 && measuredKeLineVPerRpm < MIN_MEASURED_KE_V_PER_RPM) {
+            c.require(false, "measuredKeLineVPerRpm", measuredKeLineVPerRpm, "must be 0 (computed) or between "
+                    + MIN_MEASURED_KE_V_PER_RPM + " and 100 V/rpm", "0, or " + MIN_MEASURED_KE_V_PER_RPM + " to 100");
+        }
+        if (phaseInductanceH > 0 && phaseInductanceH < MIN_PHASE_INDUCTANCE_H) {
+            c.require(false, "phaseInductanceH", phaseInductanceH, "must be 0 (estimated) or between "
+                    + MIN_PHASE_INDUCTANCE_H + " and 10 H", "0, or " + MIN_PHASE_INDUCTANCE_H + " to 10");
+        }
         if (rotor instanceof AxialDualRotor && stator != null && !(stator instanceof AirCoredStator)) {
             c.require(false, "stator", "slotted", "an axial dual rotor runs over an air-cored coil stator", "air-cored stator");
         }
