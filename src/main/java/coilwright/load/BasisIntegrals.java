@@ -97,7 +97,7 @@ final class BasisIntegrals {
         // d * sum_{n>=2} x^(n-1) / n!
         double term = 0.5 * x;
         double sum = term;
-        for (int n = 3; n <= SERIES_TERMS; n++) {
+        for (int n = 3; n <= SERIES_TERMS && Math.abs(term) > 1e-18 * Math.abs(sum); n++) {
             term *= x / n;
             sum += term;
         }
@@ -118,7 +118,11 @@ final class BasisIntegrals {
         double fact = 6;
         double sum = 0;
         for (int n = 2; n <= SERIES_TERMS; n++) {
-            sum += (pxy - px - py) / fact;
+            double term = (pxy - px - py) / fact;
+            sum += term;
+            if (Math.abs(term) <= 1e-18 * Math.abs(sum)) {
+                break;
+            }
             pxy *= x + y;
             px *= x;
             py *= y;

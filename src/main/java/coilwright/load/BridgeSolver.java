@@ -159,7 +159,7 @@ public final class BridgeSolver {
             // the transient below needs neither a Jacobian nor a smooth map
         }
         try {
-            return transient_(md);
+            return settledTransient(md);
         } catch (NoPeriodicSolution | MathIllegalStateException | MathIllegalArgumentException e) {
             throw new NoPeriodicSolution(first.getMessage() + "; damped Newton and " + e.getMessage());
         }
@@ -212,7 +212,7 @@ public final class BridgeSolver {
      * contraction bound q / (1 - q) |x_next - x| on the distance to the periodic state falls below
      * {@link #TRANSIENT_TOLERANCE} of the current scale.
      */
-    private static BridgeSweep transient_(BridgeModel md) {
+    private static BridgeSweep settledTransient(BridgeModel md) {
         double q = Math.exp(-md.r * md.sweepS / md.l);
         double factor = q / -Math.expm1(-md.r * md.sweepS / md.l);
         BridgeSweep sw = new BridgeSweep(md, 0, new double[md.m]);

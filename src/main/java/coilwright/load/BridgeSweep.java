@@ -324,7 +324,7 @@ final class BridgeSweep {
             int bestF = -1;
             for (int f = 0; f < nf; f++) {
                 double v = BridgeSegment.dot(fns[f], rb);
-                if (!exact && (v < -fnTol[f] || v - curvatureBound(seg, f, e1Lo, e2Lo) * h * h / 8 < -fnTol[f])) {
+                if (!exact && v < -fnTol[f]) {
                     seg.basis(hi, rb);
                     exact = true;
                     v = BridgeSegment.dot(fns[f], rb);
@@ -364,7 +364,7 @@ final class BridgeSweep {
     private double curvatureBound(BridgeSegment seg, int f, double e1Lo, double e2Lo) {
         double[] c = fns[f];
         double w = md.w;
-        return w * w * Math.hypot(c[0], c[1]) + seg.lambda1 * seg.lambda1 * Math.abs(c[3] * e1Lo)
+        return w * w * (Math.abs(c[0]) + Math.abs(c[1])) + seg.lambda1 * seg.lambda1 * Math.abs(c[3] * e1Lo)
                 + seg.lambda2 * seg.lambda2 * Math.abs(c[4] * e2Lo);
     }
 
@@ -376,6 +376,13 @@ final class BridgeSweep {
     private double dip(BridgeSegment seg, int f, double lo, double hi) {
         double[] b = new double[BridgeSegment.NB];
         double[] sl = slopes[f];
+        // decided again on exact values (the samples may come from the recurrence)
+        if (value(seg, fns[f], hi, b) < -fnTol[f]) {
+            return locate(seg, f, lo, hi);
+        }
+        if (!(value(seg, sl, lo, b) < 0 && value(seg, sl, hi, b) > 0)) {
+            return Double.NaN;
+        }
         double tauMin = new BrentSolver(1e-15, EVENT_ACCURACY_RAD / md.w)
                 .solve(MAX_BRENT_EVALUATIONS, tau -> value(seg, sl, tau, b), lo, hi);
         if (value(seg, fns[f], tauMin, b) >= -fnTol[f]) {
