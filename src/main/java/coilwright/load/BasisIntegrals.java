@@ -3,9 +3,21 @@ package coilwright.load;
 /**
  * Closed-form integrals over [0, d] of the five basis functions of a {@link BridgeSegment} and of their
  * pairwise products (a Gram matrix), so averages and rms values of the piecewise waveforms are exact.
+ * <p>
+ * The exponentials enter as phi(tau) = exp(lambda tau) - 1, with the constant term taking their values at tau = 0:
+ * in a reactance-limited circuit the constant and exponential coefficients of a current are both near V0 / R
+ * and cancel to a current thousands of times smaller over a segment much shorter than L / R, so squares formed
+ * from them would lose six or more digits, while in this basis the terms that remain are of the current's own
+ * size. Integrals of phi that would themselves cancel are summed as power series in lambda d.
  */
 final class BasisIntegrals {
+    /** Below this |lambda d| the integrals of phi are summed as series. */
+    private static final double SERIES_LIMIT = 0.5;
+    private static final int SERIES_TERMS = 24;
+
+    /** Integrals of cos, sin, 1, phi1, phi2. */
     final double[] single = new double[BridgeSegment.NB];
+    /** Gram matrix of cos, sin, 1, phi1, phi2. */
     final double[][] gram = new double[BridgeSegment.NB][BridgeSegment.NB];
 
     BasisIntegrals(BridgeSegment s, double d) {
@@ -20,8 +32,8 @@ final class BasisIntegrals {
         single[0] = (s1 - s0) / w;
         single[1] = (Math.cos(th0) - Math.cos(th1)) / w;
         single[2] = d;
-        single[3] = expm1Over(l1, d);
-        single[4] = expm1Over(l2, d);
+        single[3] = phiIntegral(l1, d);
+        single[4] = phiIntegral(l2, d);
         set(0, 0, d / 2 + sin2 / (4 * w));
         set(1, 1, d / 2 - sin2 / (4 * w));
         set(0, 1, (s1 * s1 - s0 * s0) / (2 * w));
@@ -30,15 +42,15 @@ final class BasisIntegrals {
         set(2, 2, d);
         set(2, 3, single[3]);
         set(2, 4, single[4]);
-        set(3, 3, expm1Over(2 * l1, d));
-        set(4, 4, expm1Over(2 * l2, d));
-        set(3, 4, expm1Over(l1 + l2, d));
+        set(3, 3, phiProduct(l1, l1, d));
+        set(4, 4, phiProduct(l2, l2, d));
+        set(3, 4, phiProduct(l1, l2, d));
         double[] e1 = expTrig(l1, w, th0, d);
-        set(0, 3, e1[0]);
-        set(1, 3, e1[1]);
+        set(0, 3, e1[0] - single[0]);
+        set(1, 3, e1[1] - single[1]);
         double[] e2 = expTrig(l2, w, th0, d);
-        set(0, 4, e2[0]);
-        set(1, 4, e2[1]);
+        set(0, 4, e2[0] - single[0]);
+        set(1, 4, e2[1] - single[1]);
     }
 
     private void set(int i, int j, double v) {
@@ -46,31 +58,77 @@ final class BasisIntegrals {
         gram[j][i] = v;
     }
 
-    /** Integral of p(tau) q(tau) for coefficient vectors p and q. */
+    /** Coefficients on cos, sin, 1, exp1, exp2 rewritten on cos, sin, 1, phi1, phi2. */
+    private static double[] toPhi(double[] p) {
+        return new double[] {p[0], p[1], p[2] + p[3] + p[4], p[3], p[4]};
+    }
+
+    /** Integral of p(tau) q(tau) for coefficient vectors p and q (on cos, sin, 1, exp1, exp2). */
     double product(double[] p, double[] q) {
+        double[] a = toPhi(p);
+        double[] b = toPhi(q);
         double sum = 0;
         for (int i = 0; i < BridgeSegment.NB; i++) {
             double row = 0;
             for (int j = 0; j < BridgeSegment.NB; j++) {
-                row += gram[i][j] * q[j];
+                row += gram[i][j] * b[j];
             }
-            sum += p[i] * row;
+            sum += a[i] * row;
         }
         return sum;
     }
 
-    /** Integral of p(tau). */
+    /** Integral of p(tau) (coefficients on cos, sin, 1, exp1, exp2). */
     double integral(double[] p) {
+        double[] a = toPhi(p);
         double sum = 0;
         for (int i = 0; i < BridgeSegment.NB; i++) {
-            sum += p[i] * single[i];
+            sum += a[i] * single[i];
         }
         return sum;
     }
 
-    /** (exp(lambda d) - 1) / lambda without cancellation; lambda < 0. */
-    private static double expm1Over(double lambda, double d) {
-        return Math.expm1(lambda * d) / lambda;
+    /** Integral of exp(c tau) - 1 - c tau over [0, d], divided by c: (expm1(c d) - c d) / c; 0 for c = 0. */
+    private static double phiIntegral(double c, double d) {
+        double x = c * d;
+        if (Math.abs(x) > SERIES_LIMIT) {
+            return (Math.expm1(x) - x) / c;
+        }
+        // d * sum_{n>=2} x^(n-1) / n!
+        double term = 0.5 * x;
+        double sum = term;
+        for (int n = 3; n <= SERIES_TERMS && Math.abs(term) > 1e-18 * Math.abs(sum); n++) {
+            term *= x / n;
+            sum += term;
+        }
+        return d * sum;
+    }
+
+    /** Integral of (exp(a tau) - 1)(exp(b tau) - 1) over [0, d]. */
+    private static double phiProduct(double a, double b, double d) {
+        if (Math.max(Math.abs(a), Math.abs(b)) * d > SERIES_LIMIT) {
+            return phiIntegral(a + b, d) - phiIntegral(a, d) - phiIntegral(b, d);
+        }
+        // sum_{n>=2} d^(n+1) ((a+b)^n - a^n - b^n) / (n+1)!
+        double x = a * d;
+        double y = b * d;
+        double pxy = (x + y) * (x + y);
+        double px = x * x;
+        double py = y * y;
+        double fact = 6;
+        double sum = 0;
+        for (int n = 2; n <= SERIES_TERMS; n++) {
+            double term = (pxy - px - py) / fact;
+            sum += term;
+            if (Math.abs(term) <= 1e-18 * Math.abs(sum)) {
+                break;
+            }
+            pxy *= x + y;
+            px *= x;
+            py *= y;
+            fact *= n + 2;
+        }
+        return d * sum;
     }
 
     /** Integral of exp(lambda tau) times cos and sin of (th0 + w tau) over [0, d]. */

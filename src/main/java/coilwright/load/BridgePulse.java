@@ -30,6 +30,8 @@ final class BridgePulse {
     private static final double MAX_KAPPA_X = 2;
     private static final double MAX_END_PSI_RAD = 0.45;
     private static final int TERMS = 60;
+    /** Largest series coefficient kept (its term is negligible long before; see coefficients). */
+    private static final double COEFFICIENT_LIMIT = 1e250;
     private static final GaussIntegrator UNIT = new GaussIntegratorFactory().legendre(24, 0, 1);
 
     final int k;
@@ -140,6 +142,12 @@ final class BridgePulse {
             double gamma = n % 2 == 1 ? s * ((n / 2) % 2 == 0 ? 1 : -1) / fact
                     : -c * ((n / 2) % 2 == 1 ? 1 : -1) / fact;
             f[n + 1] = (gamma - kappa * f[n]) / (n + 1);
+            if (!Double.isFinite(f[n + 1]) || Math.abs(f[n + 1]) > COEFFICIENT_LIMIT) {
+                // a strongly resistive loop: |f_n| grows like kappa^n / n!, but the series is summed only for
+                // x <= 2 / kappa, where these terms are below 2^n / n! of the sum: the rest is dropped
+                f[n + 1] = 0;
+                break;
+            }
         }
         return f;
     }

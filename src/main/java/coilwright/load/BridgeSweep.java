@@ -29,6 +29,8 @@ final class BridgeSweep {
     static final double EVENT_ACCURACY_RAD = 1e-14;
     /** Noise level of an event function relative to the sum of its coefficient magnitudes. */
     static final double NOISE = 1e-13;
+    /** First sampling step of a segment with fast exponential modes, in time constants of the fastest one. */
+    static final double FAST_STEP_TIME_CONSTANTS = 0.5;
     private static final int MAX_EVENTS = 200;
     private static final int MAX_BRENT_EVALUATIONS = 200;
 
@@ -43,6 +45,11 @@ final class BridgeSweep {
     final List<BridgePulse> pulses = new ArrayList<>(8);
     final double[] end;
     final double t0;
+    /**
+     * Largest sum of coefficient magnitudes of a branch current over the segments, A: the rounding noise of every
+     * current in this sweep is a small multiple of 1e-16 of it (the terms of a waveform can cancel to far less).
+     */
+    double coefficientMagnitudeA;
 
     private final BridgeModel md;
     private final double tolV;
@@ -51,6 +58,9 @@ final class BridgeSweep {
     private final int[] fnBranch;
     private final double[] fnTol;
     private final double[] prev;
+    private final double[][] slopes;
+    private final double[] slopeTol;
+    private final double[] prevSlope;
     private final double[] bs = new double[BridgeSegment.NB];
     private double evTau;
     private int evType;
@@ -67,6 +77,9 @@ final class BridgeSweep {
         fnBranch = new int[nf];
         fnTol = new double[nf];
         prev = new double[nf];
+        slopes = new double[nf][BridgeSegment.NB];
+        slopeTol = new double[nf];
+        prevSlope = new double[nf];
         double tEnd = t0 + md.sweepS;
         double[] x = x0.clone();
         int[] sign = new int[md.m];
@@ -85,7 +98,7 @@ final class BridgeSweep {
         BridgeSegment seg = settle(sign, t, x);
         for (int events = 0; ; events++) {
             if (events > MAX_EVENTS) {
-                throw new IllegalStateException("bridge solver: more than " + MAX_EVENTS
+                throw new NoPeriodicSolution("more than " + MAX_EVENTS
                         + " switching events in one interval (w = " + md.w + " rad/s, V0 = " + md.v0 + " V)");
             }
             boolean found = seg.off() ? offEvent(t, tEnd - t) : findEvent(seg, tEnd - t);
@@ -151,6 +164,13 @@ final class BridgeSweep {
     }
 
     private void add(BridgeSegment seg, double d, BridgePulse pulse) {
+        for (double[] current : seg.current) {
+            double sum = 0;
+            for (double c : current) {
+                sum += Math.abs(c);
+            }
+            coefficientMagnitudeA = Math.max(coefficientMagnitudeA, sum);
+        }
         segments.add(seg);
         durations.add(d);
         pulses.add(pulse);
@@ -252,56 +272,77 @@ final class BridgeSweep {
         return true;
     }
 
-    /** Finds the first event of a conducting segment within (0, remaining]; sets evTau, evType, evK, evJ. */
+    /**
+     * Finds the first event of a conducting segment within (0, remaining]; sets evTau, evType, evK, evJ.
+     * <p>
+     * Sampling alone misses an event function that dips below zero and recovers between two samples (a diode
+     * current touching zero near the instant its pair's window opens): both samples are positive. So each step
+     * is also checked for an interior minimum: where the function's slope turns from negative to positive within
+     * the step and the bound on its curvature leaves room for a dip below the noise level, the minimum is located
+     * and, when it lies below minus the noise level, the crossing before it is the event. The first steps of a
+     * segment whose exponential modes are fast against the sampling step are shorter (doubling from half a time
+     * constant) so that no transient turns round twice within one step.
+     */
     private boolean findEvent(BridgeSegment seg, double remaining) {
         int nf = eventFunctions(seg);
         seg.basis(0, bs);
         for (int f = 0; f < nf; f++) {
             prev[f] = BridgeSegment.dot(fns[f], bs);
+            prevSlope[f] = BridgeSegment.dot(slopes[f], bs);
             if (prev[f] < -fnTol[f]) {
                 return fire(0, f);
             }
         }
-        double step = SAMPLE_RAD / md.w;
-        // the basis is advanced by recurrence between samples (exact re-evaluation before any decision)
+        double fullStep = SAMPLE_RAD / md.w;
+        double step = Math.min(fullStep, FAST_STEP_TIME_CONSTANTS / -seg.lambda2);
+        // the basis is advanced by recurrence between full steps (exact re-evaluation before any decision)
         double cStep = Math.cos(SAMPLE_RAD);
         double sStep = Math.sin(SAMPLE_RAD);
-        double e1Step = Math.exp(seg.lambda1 * step);
-        double e2Step = Math.exp(seg.lambda2 * step);
+        double e1Step = Math.exp(seg.lambda1 * fullStep);
+        double e2Step = Math.exp(seg.lambda2 * fullStep);
         double[] rb = bs.clone();
         double lo = 0;
         while (lo < remaining) {
             double hi = lo + step;
-            if (hi >= remaining) {
-                hi = remaining;
+            double e1Lo = rb[3];
+            double e2Lo = rb[4];
+            boolean exact;
+            if (hi >= remaining || step < fullStep) {
+                hi = Math.min(hi, remaining);
                 seg.basis(hi, rb);
+                exact = true;
             } else {
                 double c = rb[0] * cStep - rb[1] * sStep;
                 rb[1] = rb[1] * cStep + rb[0] * sStep;
                 rb[0] = c;
                 rb[3] *= e1Step;
                 rb[4] *= e2Step;
+                exact = false;
             }
+            double h = hi - lo;
             double best = Double.POSITIVE_INFINITY;
             int bestF = -1;
-            boolean exact = hi == remaining;
             for (int f = 0; f < nf; f++) {
                 double v = BridgeSegment.dot(fns[f], rb);
+                if (!exact && v < -fnTol[f]) {
+                    seg.basis(hi, rb);
+                    exact = true;
+                    v = BridgeSegment.dot(fns[f], rb);
+                }
+                double slope = BridgeSegment.dot(slopes[f], rb);
+                double root = Double.NaN;
                 if (v < -fnTol[f]) {
-                    if (!exact) {
-                        seg.basis(hi, rb);
-                        exact = true;
-                        v = BridgeSegment.dot(fns[f], rb);
-                    }
-                    if (v < -fnTol[f]) {
-                        double root = locate(seg, f, lo, hi);
-                        if (root < best) {
-                            best = root;
-                            bestF = f;
-                        }
-                    }
+                    root = locate(seg, f, lo, hi);
+                } else if (prevSlope[f] < -slopeTol[f] && slope > slopeTol[f]
+                        && Math.min(prev[f], v) - curvatureBound(seg, f, e1Lo, e2Lo) * h * h / 8 < -fnTol[f]) {
+                    root = dip(seg, f, lo, hi);
+                }
+                if (root < best) {
+                    best = root;
+                    bestF = f;
                 }
                 prev[f] = v;
+                prevSlope[f] = slope;
             }
             if (bestF >= 0) {
                 return fire(best, bestF);
@@ -311,8 +352,43 @@ final class BridgeSweep {
                 seg.basis(hi, rb);
             }
             lo = hi;
+            step = Math.min(2 * step, fullStep);
         }
         return false;
+    }
+
+    /**
+     * Bound on |f''| of event function f over a step starting at lo, from the basis values there (the
+     * exponential modes decay, so their share is largest at the start of the step).
+     */
+    private double curvatureBound(BridgeSegment seg, int f, double e1Lo, double e2Lo) {
+        double[] c = fns[f];
+        double w = md.w;
+        return w * w * (Math.abs(c[0]) + Math.abs(c[1])) + seg.lambda1 * seg.lambda1 * Math.abs(c[3] * e1Lo)
+                + seg.lambda2 * seg.lambda2 * Math.abs(c[4] * e2Lo);
+    }
+
+    /**
+     * The event within a step where function f is valid at both ends but its slope turns from negative to
+     * positive: the crossing before the interior minimum when that minimum lies below minus the noise level,
+     * else NaN (no event).
+     */
+    private double dip(BridgeSegment seg, int f, double lo, double hi) {
+        double[] b = new double[BridgeSegment.NB];
+        double[] sl = slopes[f];
+        // decided again on exact values (the samples may come from the recurrence)
+        if (value(seg, fns[f], hi, b) < -fnTol[f]) {
+            return locate(seg, f, lo, hi);
+        }
+        if (!(value(seg, sl, lo, b) < 0 && value(seg, sl, hi, b) > 0)) {
+            return Double.NaN;
+        }
+        double tauMin = new BrentSolver(1e-15, EVENT_ACCURACY_RAD / md.w)
+                .solve(MAX_BRENT_EVALUATIONS, tau -> value(seg, sl, tau, b), lo, hi);
+        if (value(seg, fns[f], tauMin, b) >= -fnTol[f]) {
+            return Double.NaN;
+        }
+        return locate(seg, f, lo, tauMin);
     }
 
     private boolean fire(double tau, int f) {
@@ -363,27 +439,37 @@ final class BridgeSweep {
                 for (int i = 0; i < BridgeSegment.NB; i++) {
                     fns[nf][i] = seg.current[k][i] * seg.sign[k];
                 }
-                tag(nf++, CURRENT, k);
+                tag(seg, nf++, CURRENT, k);
             } else {
                 for (int i = 0; i < BridgeSegment.NB; i++) {
                     double e = i == 0 ? md.a[k] : i == 1 ? md.b[k] : 0;
                     fns[nf][i] = seg.uUp[i] - e;
                     fns[nf + 1][i] = e - seg.uDown[i];
                 }
-                tag(nf++, JOIN_UP, k);
-                tag(nf++, JOIN_DOWN, k);
+                tag(seg, nf++, JOIN_UP, k);
+                tag(seg, nf++, JOIN_DOWN, k);
             }
         }
         return nf;
     }
 
-    private void tag(int f, int type, int k) {
+    private void tag(BridgeSegment seg, int f, int type, int k) {
         fnType[f] = type;
         fnBranch[f] = k;
+        double[] c = fns[f];
+        double[] d = slopes[f];
+        d[0] = md.w * c[1];
+        d[1] = -md.w * c[0];
+        d[2] = 0;
+        d[3] = seg.lambda1 * c[3];
+        d[4] = seg.lambda2 * c[4];
         double sum = 0;
-        for (double c : fns[f]) {
-            sum += Math.abs(c);
+        double slopeSum = 0;
+        for (int i = 0; i < BridgeSegment.NB; i++) {
+            sum += Math.abs(c[i]);
+            slopeSum += Math.abs(d[i]);
         }
         fnTol[f] = NOISE * sum;
+        slopeTol[f] = NOISE * slopeSum;
     }
 }

@@ -39,10 +39,13 @@ public record AlternatorSpec(
         double magnetTempC,
         double measuredKeLineVPerRpm,
         double phaseInductanceH) {
-    /** The smallest measured Ke admitted, line V rms per rpm (0 = compute it). */
+    /**
+     * Smallest measured line EMF constant, V/rpm: 1e-4 V/rpm gives 0.1 V at 1000 rpm, below any machine that
+     * charges a battery (the electrical frequency a speed implies would otherwise leave every physical range).
+     */
     public static final double MIN_MEASURED_KE_V_PER_RPM = 1e-4;
-    /** The smallest measured phase inductance admitted, H (0 = estimate it). */
-    public static final double MIN_MEASURED_INDUCTANCE_H = 1e-6;
+    /** Smallest entered phase inductance, H (1 uH: a few turns of an air-cored coil; common practice). */
+    public static final double MIN_PHASE_INDUCTANCE_H = 1e-6;
 
     public AlternatorSpec {
         Checks c = new Checks()
@@ -58,16 +61,14 @@ public record AlternatorSpec(
                 .range("magnetTempC", magnetTempC, -40, 250)
                 .range("measuredKeLineVPerRpm", measuredKeLineVPerRpm, 0, 100)
                 .range("phaseInductanceH", phaseInductanceH, 0, 10);
-        // a measured value replaces the model's own: admitted only where the model still works (common practice: an
-        // LCR meter on a small machine's winding reads microhenries at best; a Ke below 0.1 V per 1000 rpm would put
-        // cut-in beyond any admitted speed). Below these the pulse integration and the speed-derived checks break down.
+        // 0 asks for the computed value; an entered one must be a machine's, not a rounding residue
         if (measuredKeLineVPerRpm > 0 && measuredKeLineVPerRpm < MIN_MEASURED_KE_V_PER_RPM) {
-            c.require(false, "measuredKeLineVPerRpm", measuredKeLineVPerRpm, "must be 0 (computed) or at least "
-                    + MIN_MEASURED_KE_V_PER_RPM + " V/rpm", "0, or " + MIN_MEASURED_KE_V_PER_RPM + " to 100");
+            c.require(false, "measuredKeLineVPerRpm", measuredKeLineVPerRpm, "must be 0 (computed) or between "
+                    + MIN_MEASURED_KE_V_PER_RPM + " and 100 V/rpm", "0, or " + MIN_MEASURED_KE_V_PER_RPM + " to 100");
         }
-        if (phaseInductanceH > 0 && phaseInductanceH < MIN_MEASURED_INDUCTANCE_H) {
-            c.require(false, "phaseInductanceH", phaseInductanceH, "must be 0 (estimated) or at least "
-                    + MIN_MEASURED_INDUCTANCE_H + " H", "0, or " + MIN_MEASURED_INDUCTANCE_H + " to 10");
+        if (phaseInductanceH > 0 && phaseInductanceH < MIN_PHASE_INDUCTANCE_H) {
+            c.require(false, "phaseInductanceH", phaseInductanceH, "must be 0 (estimated) or between "
+                    + MIN_PHASE_INDUCTANCE_H + " and 10 H", "0, or " + MIN_PHASE_INDUCTANCE_H + " to 10");
         }
         if (rotor instanceof AxialDualRotor && stator != null && !(stator instanceof AirCoredStator)) {
             c.require(false, "stator", "slotted", "an axial dual rotor runs over an air-cored coil stator", "air-cored stator");

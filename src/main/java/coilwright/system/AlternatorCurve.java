@@ -1,6 +1,7 @@
 package coilwright.system;
 
 import coilwright.load.Load;
+import coilwright.load.LoadSolver;
 import coilwright.machine.Alternator;
 import coilwright.validation.Checks;
 
@@ -10,13 +11,15 @@ import java.util.Map;
 
 /**
  * An alternator with its load seen as a torque-speed curve at its shaft, for matching to a turbine. Each
- * operating point is solved by {@link AlternatorEvaluator#point} and kept, so a speed asked twice is solved
- * once. Not thread-safe: one instance per matching run.
+ * operating point is solved on one warm-started sweep, the same path as an evaluation's curve (each point starts
+ * from the previous solutions; the answer is the cold solve's to the solver's tolerance), and kept, so a speed
+ * asked twice is solved once. Not thread-safe: one instance per matching run.
  */
 public final class AlternatorCurve {
     private final Alternator alternator;
     private final Load load;
     private final Map<Double, SpeedPoint> solved = new HashMap<>();
+    private final LoadSolver.Sweep sweep;
 
     /**
      * @param alternator the built machine
@@ -26,6 +29,7 @@ public final class AlternatorCurve {
         new Checks().present("alternator", alternator).present("load", load).throwIfAny();
         this.alternator = alternator;
         this.load = load;
+        this.sweep = AlternatorEvaluator.sweep(alternator, load);
     }
 
     /**
@@ -37,7 +41,7 @@ public final class AlternatorCurve {
         new Checks().nonNegative("speedRpm", speedRpm).throwIfAny();
         return solved.computeIfAbsent(speedRpm, n -> {
             TimeBudget.check("");
-            return AlternatorEvaluator.point(alternator, load, n);
+            return AlternatorEvaluator.point(alternator, sweep, n);
         });
     }
 

@@ -16,6 +16,7 @@ import coilwright.magnet.MagnetGrade;
 import coilwright.magnet.MagnetMaterial;
 import coilwright.safety.Cautions;
 import coilwright.safety.SafetyInputs;
+import coilwright.validation.SolverFailedException;
 
 import coilwright.validation.TimeBudget;
 import java.util.ArrayList;
@@ -99,26 +100,39 @@ public final class AlternatorEvaluator {
         }
         AcSource src = new AcSource(alt.spec().winding().phases(), alt.spec().connection(), ePh, f,
                 alt.phaseResistanceHotOhm(), alt.phaseInductanceH());
-        return speedPoint(alt, speedRpm, f, ePh, eLine, LoadSolver.solve(src, load));
+        return speedPoint(alt, speedRpm, f, ePh, eLine, atSpeed(speedRpm, () -> LoadSolver.solve(src, load)));
     }
 
-    /** A warm-started sweep over speeds for this alternator and load. */
-    private static LoadSolver.Sweep sweep(Alternator alt, Load load) {
+    /** Runs one operating-point solve, naming the shaft speed in a solver failure. */
+    private static OperatingPoint atSpeed(double speedRpm, java.util.function.Supplier<OperatingPoint> solve) {
+        try {
+            return solve.get();
+        } catch (SolverFailedException e) {
+            throw new SolverFailedException(e.field(), String.format(Locale.ROOT, "At %.6g rpm: %s", speedRpm,
+                    e.getMessage()), e.getCause());
+        }
+    }
+
+    /** A warm-started sweep over speeds for this alternator and load (one per thread). */
+    static LoadSolver.Sweep sweep(Alternator alt, Load load) {
         // the reference source only carries the speed-independent constants
         AcSource reference = new AcSource(alt.spec().winding().phases(), alt.spec().connection(), 0, 1,
                 alt.phaseResistanceHotOhm(), alt.phaseInductanceH());
         return LoadSolver.sweep(reference, load);
     }
 
-    /** {@link #point(Alternator, Load, double)} solved on a sweep. */
-    private static SpeedPoint point(Alternator alt, LoadSolver.Sweep sweep, double speedRpm) {
+    /**
+     * {@link #point(Alternator, Load, double)} solved on a sweep: the same operating point to the solver's
+     * tolerance, started from the sweep's previous solutions. Evaluation and matching both use it.
+     */
+    static SpeedPoint point(Alternator alt, LoadSolver.Sweep sweep, double speedRpm) {
         double f = alt.frequencyHz(speedRpm);
         double ePh = alt.emfPhaseRmsV(speedRpm);
         double eLine = alt.emfLineRmsV(speedRpm);
         if (speedRpm <= 0) {
             return new SpeedPoint(0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, ConductionMode.ZERO_BELOW_CUT_IN);
         }
-        return speedPoint(alt, speedRpm, f, ePh, eLine, sweep.solveAt(ePh, f));
+        return speedPoint(alt, speedRpm, f, ePh, eLine, atSpeed(speedRpm, () -> sweep.solveAt(ePh, f)));
     }
 
     private static SpeedPoint speedPoint(Alternator alt, double speedRpm, double f, double ePh, double eLine,

@@ -16,7 +16,7 @@ import coilwright.validation.Checks;
  * @param penstock              the pipe
  * @param runner                the runner
  * @param driveRatio            alternator speed / runner speed, > 0 and <= 20 (1 for direct drive)
- * @param drivetrainEfficiency  belt or coupling efficiency, > 0 and <= 1
+ * @param drivetrainEfficiency  belt or coupling efficiency, 0.5 to 1
  * @param waterTempC            water temperature for the pipe friction, C, 0 to 40
  */
 public record HydroMatchRequest(AlternatorSpec alternator, Load load, HydroSite site, PenstockSpec penstock,
@@ -25,7 +25,7 @@ public record HydroMatchRequest(AlternatorSpec alternator, Load load, HydroSite 
         Checks c = new Checks().present("alternator", alternator).present("load", load).present("site", site)
                 .present("penstock", penstock).present("runner", runner)
                 .rangeExclusiveMin("driveRatio", driveRatio, 0.0, 20.0)
-                .rangeExclusiveMin("drivetrainEfficiency", drivetrainEfficiency, 0.0, 1.0)
+                .range("drivetrainEfficiency", drivetrainEfficiency, 0.5, 1.0)
                 .range("waterTempC", waterTempC, 0.0, 40.0);
         if (site != null && runner != null) {
             c.require(site.grossHeadM() <= runner.kind().maxHeadM(), "site.grossHeadM", site.grossHeadM(),

@@ -1,8 +1,13 @@
 package coilwright.system;
 
 import coilwright.validation.Checks;
+import coilwright.validation.SolverFailedException;
 import org.apache.commons.math3.analysis.UnivariateFunction;
 import org.apache.commons.math3.analysis.solvers.BrentSolver;
+import org.apache.commons.math3.exception.MathIllegalArgumentException;
+import org.apache.commons.math3.exception.MathIllegalStateException;
+
+import java.util.Locale;
 
 import java.util.function.DoubleUnaryOperator;
 
@@ -69,7 +74,14 @@ public final class TorqueMatch {
 
     private static double refine(DoubleUnaryOperator residualNm, double lowRpm, double highRpm) {
         UnivariateFunction f = residualNm::applyAsDouble;
-        return new BrentSolver(RELATIVE_ACCURACY, ABSOLUTE_ACCURACY_RPM).solve(MAX_EVAL, f, lowRpm, highRpm);
+        try {
+            return new BrentSolver(RELATIVE_ACCURACY, ABSOLUTE_ACCURACY_RPM).solve(MAX_EVAL, f, lowRpm, highRpm);
+        } catch (MathIllegalStateException | MathIllegalArgumentException e) {
+            throw new SolverFailedException("", String.format(Locale.ROOT, "The torque balance between the turbine "
+                    + "and the alternator was not settled between %.6g and %.6g rpm at the alternator (%s). A slightly "
+                    + "different drive ratio or turbine size usually avoids it; please report the design if it does "
+                    + "not.", lowRpm, highRpm, e.getMessage()), e);
+        }
     }
 
     /**

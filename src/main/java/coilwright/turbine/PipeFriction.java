@@ -1,6 +1,7 @@
 package coilwright.turbine;
 
 import coilwright.validation.Checks;
+import coilwright.validation.SolverFailedException;
 import org.apache.commons.math3.analysis.UnivariateFunction;
 import org.apache.commons.math3.analysis.solvers.BrentSolver;
 
@@ -44,8 +45,16 @@ public final class PipeFriction {
         checkTurbulent(reynoldsNumber, relativeRoughness);
         UnivariateFunction residual = x -> x + 2.0 * Math.log10(relativeRoughness / 3.7 + 2.51 * x / reynoldsNumber);
         double start = 1.0 / Math.sqrt(swameeJain(reynoldsNumber, relativeRoughness));
-        double x = new BrentSolver(SOLVER_ABS_TOL).solve(MAX_EVAL, residual, X_MIN, X_MAX,
-                Math.min(X_MAX, Math.max(X_MIN, start)));
+        double x;
+        try {
+            x = new BrentSolver(SOLVER_ABS_TOL).solve(MAX_EVAL, residual, X_MIN, X_MAX,
+                    Math.min(X_MAX, Math.max(X_MIN, start)));
+        } catch (org.apache.commons.math3.exception.MathIllegalStateException
+                 | org.apache.commons.math3.exception.MathIllegalArgumentException e) {
+            throw new SolverFailedException("roughnessM", String.format(java.util.Locale.ROOT, "The Colebrook friction "
+                    + "factor was not found at Reynolds number %.6g and relative roughness %.4g (%s). Check the pipe's "
+                    + "roughness and diameter.", reynoldsNumber, relativeRoughness, e.getMessage()), e);
+        }
         return 1.0 / (x * x);
     }
 

@@ -1,6 +1,7 @@
 package coilwright.turbine;
 
 import coilwright.validation.Checks;
+import coilwright.validation.SolverFailedException;
 import org.apache.commons.math3.analysis.UnivariateFunction;
 import org.apache.commons.math3.analysis.integration.IterativeLegendreGaussIntegrator;
 
@@ -70,8 +71,14 @@ public final class StartingTorque {
             double theta = phi - alpha;
             return chord * x * Math.sin(theta) * Math.cos(theta);
         };
-        double integral = new IterativeLegendreGaussIntegrator(8, 1e-10, 1e-14).integrate(100_000, integrand,
-                Math.max(hubRatio, 1e-6), 1.0);
+        double integral;
+        try {
+            integral = new IterativeLegendreGaussIntegrator(8, 1e-10, 1e-14).integrate(100_000, integrand,
+                    Math.max(hubRatio, 1e-6), 1.0);
+        } catch (org.apache.commons.math3.exception.MathIllegalStateException e) {
+            throw new SolverFailedException("designTipSpeedRatio", "The blade's chord-pitch integral did not converge ("
+                    + e.getMessage() + "); a design tip-speed ratio nearer the common 4 to 8 avoids it.", e);
+        }
         return fromChordPitchIntegral(bladeCount, 1.0, integral);
     }
 

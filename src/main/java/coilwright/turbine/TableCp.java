@@ -1,6 +1,7 @@
 package coilwright.turbine;
 
 import coilwright.validation.Checks;
+import coilwright.validation.SolverFailedException;
 import org.apache.commons.math3.analysis.UnivariateFunction;
 import org.apache.commons.math3.analysis.interpolation.AkimaSplineInterpolator;
 import org.apache.commons.math3.analysis.interpolation.LinearInterpolator;
@@ -115,9 +116,15 @@ public record TableCp(double[] tipSpeedRatios, double[] cps) implements PowerCoe
         }
         double lo = first + Math.max(0, best - 1) * step;
         double hi = first + Math.min(SAMPLES, best + 1) * step;
-        double refined = new BrentOptimizer(1e-10, 1e-12).optimize(new MaxEval(MAX_EVAL), GoalType.MAXIMIZE,
-                new UnivariateObjectiveFunction(v -> clamp(f.value(v))),
-                new SearchInterval(lo, hi, first + best * step)).getPoint();
+        double refined;
+        try {
+            refined = new BrentOptimizer(1e-10, 1e-12).optimize(new MaxEval(MAX_EVAL), GoalType.MAXIMIZE,
+                    new UnivariateObjectiveFunction(v -> clamp(f.value(v))),
+                    new SearchInterval(lo, hi, first + best * step)).getPoint();
+        } catch (org.apache.commons.math3.exception.MathIllegalStateException e) {
+            // the best sample stands: the table's own resolution
+            refined = first + best * step;
+        }
         return clamp(f.value(refined)) >= clamp(f.value(first + best * step)) ? refined : first + best * step;
     }
 
@@ -136,8 +143,14 @@ public record TableCp(double[] tipSpeedRatios, double[] cps) implements PowerCoe
             double a = opt + (i - 1) * step;
             double b = opt + i * step;
             if (f.value(b) <= 0.0) {
-                return f.value(b) == 0.0 ? b
-                        : new BrentSolver(SOLVER_ABS_TOL_TSR).solve(MAX_EVAL, f, a, b);
+                try {
+                    return f.value(b) == 0.0 ? b
+                            : new BrentSolver(SOLVER_ABS_TOL_TSR).solve(MAX_EVAL, f, a, b);
+                } catch (org.apache.commons.math3.exception.MathIllegalStateException
+                         | org.apache.commons.math3.exception.MathIllegalArgumentException e) {
+                    throw new SolverFailedException("points", "The runaway tip-speed ratio of the Cp table was not "
+                            + "found between " + a + " and " + b + " (" + e.getMessage() + "); check the table's points.", e);
+                }
             }
         }
         return last;

@@ -1,6 +1,7 @@
 package coilwright.turbine;
 
 import coilwright.validation.Checks;
+import coilwright.validation.SolverFailedException;
 import org.apache.commons.math3.analysis.solvers.BrentSolver;
 
 import java.util.function.DoubleUnaryOperator;
@@ -16,7 +17,7 @@ import java.util.function.DoubleUnaryOperator;
  * @param curve                 the power-coefficient curve
  * @param maxRotorSpeedRpm      furling or governor speed limit, rpm; 0 means none
  * @param driveRatio            alternator speed / rotor speed, > 0 and <= 50; 1 for direct drive
- * @param drivetrainEfficiency  gearbox or belt efficiency between rotor and alternator, > 0 and <= 1
+ * @param drivetrainEfficiency  gearbox or belt efficiency between rotor and alternator, 0.5 to 1
  */
 public record WindRotor(double diameterM, int bladeCount, PowerCoefficientCurve curve, double maxRotorSpeedRpm,
                         double driveRatio, double drivetrainEfficiency) {
@@ -33,7 +34,7 @@ public record WindRotor(double diameterM, int bladeCount, PowerCoefficientCurve 
         c.present("curve", curve);
         c.nonNegative("maxRotorSpeedRpm", maxRotorSpeedRpm);
         c.rangeExclusiveMin("driveRatio", driveRatio, 0.0, 50.0);
-        c.rangeExclusiveMin("drivetrainEfficiency", drivetrainEfficiency, 0.0, 1.0);
+        c.range("drivetrainEfficiency", drivetrainEfficiency, 0.5, 1.0);
         c.throwIfAny();
     }
 
@@ -201,8 +202,14 @@ public record WindRotor(double diameterM, int bladeCount, PowerCoefficientCurve 
         for (int i = 1; i <= UNLOADED_SCAN_STEPS; i++) {
             double low = runaway * (UNLOADED_SCAN_STEPS - i) / UNLOADED_SCAN_STEPS;
             if (net.applyAsDouble(low) >= 0) {
-                return new BrentSolver(UNLOADED_ACCURACY_RPM)
-                        .solve(200, net::applyAsDouble, low, high);
+                try {
+                    return new BrentSolver(UNLOADED_ACCURACY_RPM).solve(200, net::applyAsDouble, low, high);
+                } catch (org.apache.commons.math3.exception.MathIllegalStateException
+                         | org.apache.commons.math3.exception.MathIllegalArgumentException e) {
+                    throw new SolverFailedException("", String.format(java.util.Locale.ROOT, "The rotor's unloaded "
+                            + "speed at %.4g m/s was not settled between %.6g and %.6g rpm (%s); please report the "
+                            + "design.", windSpeedMs, low, high, e.getMessage()), e);
+                }
             }
             high = low;
         }

@@ -194,4 +194,16 @@ class BridgeSolverTest {
             assertEquals(ratio > 1, BridgeSolver.solve(c).dcCurrentA() > 0, "solved current at ratio " + ratio);
         }
     }
+
+    @Test
+    void a_circuit_beyond_the_resolvable_reactance_ratios_is_refused_with_a_typed_failure() {
+        // wL/R = 2 pi 50 x 1 / 1e-5 = 3e7: a lossless winding; and wL/(R + Rdc) = 3e-9 / 1e3: a resistive one
+        for (BridgeCircuit c : new BridgeCircuit[] {circuit(true, 100, 50, 1e-5, 1, 24, 0.8, 0, 0, 0),
+                circuit(false, 100, 50, 1e3, 1e-8, 24, 0.8, 0, 0, 0)}) {
+            coilwright.validation.SolverFailedException e = org.junit.jupiter.api.Assertions.assertThrows(
+                    coilwright.validation.SolverFailedException.class, () -> BridgeSolver.solve(c));
+            assertTrue(e.getMessage().contains("50.0000 Hz") && e.getMessage().contains("reactance"), e.getMessage());
+            assertEquals("phaseInductanceH", e.field());
+        }
+    }
 }

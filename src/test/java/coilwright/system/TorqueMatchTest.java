@@ -55,4 +55,13 @@ class TorqueMatchTest {
         assertEquals("upperRpm", e.errors().get(0).field());
         assertThrows(InvalidInputException.class, () -> TorqueMatch.grid(0, 10));
     }
+
+    @Test
+    void a_residual_the_brent_solver_cannot_settle_is_a_typed_solver_failure() {
+        // positive up to 100 rpm, negative from 200 rpm, undefined between: no root can be located
+        coilwright.validation.SolverFailedException e = assertThrows(coilwright.validation.SolverFailedException.class,
+                () -> TorqueMatch.firstStableCrossingRpm(x -> x <= 100 ? 1 : x >= 200 ? -1 : Double.NaN,
+                        new double[] {0, 100, 200, 300}, 300));
+        org.junit.jupiter.api.Assertions.assertTrue(e.getMessage().contains("100.000 and 200.000 rpm"), e.getMessage());
+    }
 }
