@@ -42,7 +42,7 @@ record LimitSet(List<Limit> limits, List<AppliedLimit> applied, List<String> not
         if (l.maxCurrentDensityAPerMm2() == 0) {
             notes.add(String.format(Locale.ROOT, "Current density limited to %.1f A/mm^2, the top of the %s band; "
                     + "a winding-temperature limit will replace it when a thermal model is available", jMax,
-                    req.winding().cooling()));
+                    req.winding().cooling().name().toLowerCase(Locale.ROOT).replace('_', ' ')));
         }
         List<AppliedLimit> applied = out.stream()
                 .map(x -> new AppliedLimit(x.name(), x.field(), x.allowed(), x.unit(), x.phrase())).toList();

@@ -240,7 +240,8 @@ public final class MachineLosses {
         return x * x;
     }
 
+    /** An assumed figure as a reader sees it: three significant figures. */
     private static String fmt(double x) {
-        return coilwright.validation.Checks.fmt(x);
+        return String.format(java.util.Locale.ROOT, "%.3g", x);
     }
 }

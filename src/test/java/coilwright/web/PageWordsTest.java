@@ -45,7 +45,8 @@ class PageWordsTest {
             if (r.method() != HandlerType.GET || Route.isApiPath(r.path()) || r.path().startsWith("/api/")) {
                 continue;
             }
-            pages.add(r.path().replace("{designId}", id).replace("{revisionId}", rev));
+            String page = r.path().replace("{designId}", id).replace("{revisionId}", rev);
+            pages.add(page.contains("{jobId}") ? page.replace("{jobId}", SecurityHeadersTest.sizingJobId()) : page);
         }
         for (String slug : APP.app().services().examples().slugs()) {
             pages.add("/design/results?example=" + slug);

@@ -22,12 +22,21 @@ final class UnitsSwitch {
     }
 
     static String here(Context ctx) {
-        Map<String, List<String>> fields = ctx.method() == HandlerType.GET ? ctx.queryParamMap() : ctx.formParamMap();
+        Map<String, List<String>> fields = ctx.method() == HandlerType.GET ? ctx.queryParamMap() : postedFields(ctx);
         String query = fields.entrySet().stream()
                 .filter(e -> !e.getKey().equals(Units.PARAM) && !e.getKey().equals(SECRET))
                 .flatMap(e -> e.getValue().stream().map(v -> enc(e.getKey()) + "=" + enc(v)))
                 .collect(Collectors.joining("&"));
         return query.isEmpty() ? ctx.path() : ctx.path() + "?" + query;
+    }
+
+    /** The posted fields, or none when the body could not be read (a malformed multipart body being refused). */
+    private static Map<String, List<String>> postedFields(Context ctx) {
+        try {
+            return ctx.formParamMap();
+        } catch (Exception unreadableBody) { // a ServletException is thrown unchecked here
+            return Map.of();
+        }
     }
 
     private static String enc(String s) {
