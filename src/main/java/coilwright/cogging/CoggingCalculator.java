@@ -4,7 +4,10 @@ import coilwright.magnet.RotorSide;
 import org.apache.commons.math3.util.ArithmeticUtils;
 
 import java.util.ArrayList;
+import java.util.Collections;
+import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Map;
 
 /**
  * Cogging torque of slotted surface-magnet machines from the no-load field of {@link SubdomainField} (the subdomain
@@ -27,6 +30,17 @@ public final class CoggingCalculator {
     /** The method in words. */
     public static final String METHOD = "subdomain field model (Zhu, Wu, Xia & Howe 2010, Cartesian form) with the "
             + "Maxwell stress in the air gap; skew factor on each harmonic";
+
+    /** Recently computed machines: cogging depends on geometry and magnets only, which a design session rarely
+     * changes while turns, wire, battery and speeds change on every request. Bounded, least recently used first out. */
+    private static final int REMEMBERED = 256;
+    private static final Map<CoggingInput, CoggingTorque> RECENT = Collections.synchronizedMap(
+            new LinkedHashMap<>(64, 0.75f, true) {
+                @Override
+                protected boolean removeEldestEntry(Map.Entry<CoggingInput, CoggingTorque> eldest) {
+                    return size() > REMEMBERED;
+                }
+            });
 
     private CoggingCalculator() {
     }
@@ -58,8 +72,18 @@ public final class CoggingCalculator {
                 + "there is no cogging torque");
     }
 
-    /** Cogging of a slotted surface-magnet machine. */
+    /** Cogging of a slotted surface-magnet machine; the same input gives the same (immutable) answer, remembered. */
     public static CoggingTorque radial(CoggingInput in) {
+        CoggingTorque known = RECENT.get(in);
+        if (known != null) {
+            return known;
+        }
+        CoggingTorque computed = computeRadial(in);
+        RECENT.put(in, computed);
+        return computed;
+    }
+
+    private static CoggingTorque computeRadial(CoggingInput in) {
         int q = in.slots();
         int lcm = ArithmeticUtils.lcm(q, in.poles());
         if (in.slotOpeningM() == 0) {
