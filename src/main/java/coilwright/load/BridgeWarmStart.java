@@ -66,6 +66,12 @@ final class BridgeWarmStart {
      * Predicted independent currents at electrical angle {@code anchorRad} for angular frequency {@code w}, A;
      * null when the last solution has only a pulse there.
      */
+    /** The last solution's independent currents at the anchor angle (its first n states), or null. */
+    private double[] latest(double anchorRad, int n) {
+        double[] y = sweeps[0].stateAtAngle(anchorRad, ws[0]);
+        return y == null ? null : java.util.Arrays.copyOf(y, n);
+    }
+
     double[] predict(double anchorRad, double w, int n) {
         int use = 1;
         if (count >= 2 && ws[0] != ws[1] && Math.abs((w - ws[0]) / (ws[0] - ws[1])) <= MAX_EXTRAPOLATION) {
@@ -75,14 +81,14 @@ final class BridgeWarmStart {
         for (int i = 0; i < use; i++) {
             double[] yi = sweeps[i].stateAtAngle(anchorRad, ws[i]);
             if (yi == null) {
-                return i == 0 ? null : sweeps[0].stateAtAngle(anchorRad, ws[0]);
+                return i == 0 ? null : latest(anchorRad, n);
             }
             double weight = 1;
             for (int j = 0; j < use; j++) {
                 if (j != i) {
                     double den = ws[i] - ws[j];
                     if (den == 0) {
-                        return sweeps[0].stateAtAngle(anchorRad, ws[0]);
+                        return latest(anchorRad, n); // the same speed twice: no extrapolation
                     }
                     weight *= (w - ws[j]) / den;
                 }

@@ -107,8 +107,27 @@ public final class LoadSolver {
                         2 * Math.PI * frequencyHz, starResistanceOhm, starInductanceH, acCableOhm,
                         resistive.resistancePerPhaseOhm());
             }
-            BridgeCircuit c = circuitAt(emfPhaseRmsV, frequencyHz);
+            BridgeCircuit c = circuitAt(emfPhaseRmsV, frequencyHz, starResistanceOhm);
             return fromBridge(delta, BridgeSolver.solve(c, warm));
+        }
+
+        /**
+         * As {@link #solveAt(double, double)} with the winding's resistance scaled (the same winding at another
+         * temperature), still warm-started from the previous call.
+         *
+         * @param resistanceScale winding resistance / the reference's, 0.1 to 10
+         * @throws InvalidInputException when an argument is out of range
+         */
+        public OperatingPoint solveAt(double emfPhaseRmsV, double frequencyHz, double resistanceScale) {
+            check(emfPhaseRmsV, frequencyHz);
+            new Checks().range("resistanceScale", resistanceScale, 0.1, 10).throwIfAny();
+            double windingOhm = starResistanceOhm * resistanceScale;
+            if (battery == null) {
+                return resistive(reference.phases(), reference.connection(), starEmf(emfPhaseRmsV),
+                        2 * Math.PI * frequencyHz, windingOhm, starInductanceH, acCableOhm,
+                        resistive.resistancePerPhaseOhm());
+            }
+            return fromBridge(delta, BridgeSolver.solve(circuitAt(emfPhaseRmsV, frequencyHz, windingOhm), warm));
         }
 
         /**
@@ -119,12 +138,13 @@ public final class LoadSolver {
          */
         public boolean conductsAt(double emfPhaseRmsV, double frequencyHz) {
             check(emfPhaseRmsV, frequencyHz);
-            return battery == null ? emfPhaseRmsV > 0 : BridgeSolver.conducts(circuitAt(emfPhaseRmsV, frequencyHz));
+            return battery == null ? emfPhaseRmsV > 0
+                    : BridgeSolver.conducts(circuitAt(emfPhaseRmsV, frequencyHz, starResistanceOhm));
         }
 
-        private BridgeCircuit circuitAt(double emfPhaseRmsV, double frequencyHz) {
+        private BridgeCircuit circuitAt(double emfPhaseRmsV, double frequencyHz, double windingStarOhm) {
             return new BridgeCircuit(battery.rectifier().type(), starEmf(emfPhaseRmsV), frequencyHz,
-                    starResistanceOhm, acCableOhm, starInductanceH, battery.battery().voltageV(),
+                    windingStarOhm, acCableOhm, starInductanceH, battery.battery().voltageV(),
                     battery.rectifier().forwardDropV(), dcCableOhm, battery.battery().internalResistanceOhm());
         }
 

@@ -2,7 +2,6 @@ package coilwright.system;
 
 import coilwright.conductor.Copper;
 import coilwright.conductor.Cooling;
-import coilwright.load.AcSource;
 import coilwright.load.Load;
 import coilwright.load.LoadSolver;
 import coilwright.load.OperatingPoint;
@@ -40,7 +39,8 @@ import java.util.List;
  * resistance at the winding temperature (IEC 60028), conductor eddy loss of air-cored coils, stator iron loss,
  * delta circulating current, bearing friction and windage (package {@code coilwright.losses}), and the thermal
  * network of the cooling arrangement (package {@code coilwright.thermal}). What the design does not state is
- * assumed and listed in {@link #assumptions()}.
+ * assumed and listed in {@link #assumptions()}. Not thread-safe: its rectifier points are warm-started one from
+ * the next, so one instance serves one thread.
  */
 public final class MachineLosses {
     /** Bearings assumed when none are given: two sealed deep-groove ball bearings of this bore, m (common practice
@@ -64,6 +64,8 @@ public final class MachineLosses {
     private final CoreFlux coreFlux;
     private final double ambientC;
     private final List<String> assumptions;
+    /** The rectifier points of every speed and temperature, each warm-started from the last (so: one thread). */
+    private final LoadSolver.Sweep sweep;
 
     /**
      * @param alt      the built machine
@@ -75,6 +77,7 @@ public final class MachineLosses {
         this.load = load;
         this.ambientC = ambientC;
         this.friction = assumedFriction();
+        this.sweep = AlternatorEvaluator.sweep(alt, load);
         String bearings = "bearings: two sealed deep-groove ball bearings, " + fmt(ASSUMED_BEARING_BORE_M * 1000)
                 + " mm bore, " + fmt(ASSUMED_BEARING_LOAD_N) + " N each, seal drag " + fmt(ASSUMED_SEAL_DRAG_NM)
                 + " N m each (assumed)";
@@ -190,10 +193,8 @@ public final class MachineLosses {
         }
 
         OperatingPoint operatingPoint(double windingC) {
-            AcSource src = new AcSource(alt.spec().winding().phases(), alt.spec().connection(),
-                    alt.emfPhaseRmsV(speedRpm), alt.frequencyHz(speedRpm), resistanceOhm(windingC),
-                    alt.phaseInductanceH());
-            return LoadSolver.solve(src, load);
+            return sweep.solveAt(alt.emfPhaseRmsV(speedRpm), alt.frequencyHz(speedRpm),
+                    resistanceOhm(windingC) / alt.phaseResistanceHotOhm());
         }
 
         double resistanceOhm(double windingC) {

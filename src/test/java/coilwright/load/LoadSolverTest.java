@@ -112,6 +112,27 @@ class LoadSolverTest {
     }
 
     @Test
+    void a_sweep_solving_one_speed_at_several_winding_temperatures_gives_the_single_point_answers() {
+        // the loss model solves each speed at several winding temperatures on one sweep (speeds repeat in the warm
+        // start's history); each answer must equal a cold solve of its own circuit
+        AcSource ref = new AcSource(3, Connection.DELTA, 1, 1, 0.9, 0.006);
+        LoadSolver.Sweep sweep = LoadSolver.sweep(ref, BATTERY_3PH);
+        for (double scale : new double[]{1.0, 1.3, 1.15, 1.3, 0.9}) {
+            for (double f : new double[]{40, 60}) {
+                double e = 30 * f / 40;
+                OperatingPoint warm = sweep.solveAt(e, f, scale);
+                AcSource hot = new AcSource(3, Connection.DELTA, e, f, 0.9 * scale, 0.006);
+                OperatingPoint cold = LoadSolver.solve(hot, BATTERY_3PH);
+                String at = f + " Hz, resistance x" + scale;
+                assertEquals(cold.dcCurrentA(), warm.dcCurrentA(), 1e-9 * Math.max(cold.dcCurrentA(), 1e-6), at);
+                assertEquals(cold.windingCopperLossW(), warm.windingCopperLossW(),
+                        1e-9 * cold.windingCopperLossW() + 1e-15, at);
+            }
+        }
+        assertThrows(InvalidInputException.class, () -> sweep.solveAt(30, 40, 0.01));
+    }
+
+    @Test
     void a_sweep_names_an_out_of_range_emf_or_frequency_like_the_source_does() {
         LoadSolver.Sweep sweep = LoadSolver.sweep(new AcSource(3, Connection.STAR, 1, 1, 0.3, 0.002), BATTERY_3PH);
         InvalidInputException e = assertThrows(InvalidInputException.class, () -> sweep.solveAt(-1, 50));
