@@ -9,6 +9,9 @@ import coilwright.validation.Checks;
  * in N m and always &gt;= 0; at the speeds of small wind and hydro alternators they are usually a few watts.
  */
 public final class Windage {
+    /** Below this Reynolds number the drag torque is negligible (under 1e-20 N m for any admitted size). */
+    private static final double NEGLIGIBLE_REYNOLDS = 1e-12;
+
     /** Free-disc transition Reynolds number omega R^2 / nu (Owen &amp; Rogers, "Flow and Heat Transfer in Rotating-Disc
      *  Systems", vol. 1, 1989; about 3e5 in still air, from memory). */
     static final double FREE_DISC_TRANSITION_RE = 3e5;
@@ -34,6 +37,9 @@ public final class Windage {
             return 0;
         }
         double re = omegaRadS * radiusM * radiusM / kinematicViscosityM2s;
+        if (re < NEGLIGIBLE_REYNOLDS) {
+            return 0; // creeping flow: the torque is below 1e-20 N m (and C_M = C/Re would overflow)
+        }
         double cm = re < FREE_DISC_TRANSITION_RE ? 3.87 / Math.sqrt(re) : 0.146 * Math.pow(re, -0.2);
         return 0.5 * densityKgM3 * omegaRadS * omegaRadS * Math.pow(radiusM, 5) * cm;
     }
@@ -56,6 +62,9 @@ public final class Windage {
             return 0;
         }
         double re = omegaRadS * radiusM * radiusM / kinematicViscosityM2s;
+        if (re < NEGLIGIBLE_REYNOLDS) {
+            return 0; // creeping flow: the torque is below 1e-20 N m (and C_M = C/Re would overflow)
+        }
         double g = axialClearanceM / radiusM;
         double laminar = Math.max(2 * Math.PI / (g * re), 3.70 * Math.pow(g, 0.1) / Math.sqrt(re));
         double turbulent = Math.max(0.080 * Math.pow(g, -1.0 / 6) * Math.pow(re, -0.25),
@@ -82,6 +91,9 @@ public final class Windage {
             return 0;
         }
         double re = omegaRadS * rotorRadiusM * radialGapM / kinematicViscosityM2s;
+        if (re < NEGLIGIBLE_REYNOLDS) {
+            return 0; // creeping flow: the torque is below 1e-20 N m (and C_M = C/Re would overflow)
+        }
         double shape = Math.pow(radialGapM / rotorRadiusM, 0.3);
         double cm;
         if (re < 64) {

@@ -17,9 +17,21 @@ import coilwright.validation.Checks;
 public record EvaluationRequest(AlternatorSpec alternator, Load load, SpeedRange speedRange, double ratedSpeedRpm,
                                 double maxSpeedRpm) {
     public EvaluationRequest {
-        new Checks().present("alternator", alternator).present("load", load).present("speedRange", speedRange)
-                .range("ratedSpeedRpm", ratedSpeedRpm, 0, 100_000).range("maxSpeedRpm", maxSpeedRpm, 0, 200_000)
-                .throwIfAny();
+        Checks c = new Checks().present("alternator", alternator).present("load", load)
+                .present("speedRange", speedRange)
+                .range("ratedSpeedRpm", ratedSpeedRpm, 0, 100_000).range("maxSpeedRpm", maxSpeedRpm, 0, 200_000);
+        // 0 means "use the range"; a given speed is a shaft's, not a rounding residue (below 1 rpm the frequency
+        // and drag figures underflow and would be refused under names the user never sent)
+        zeroOrAtLeastOne(c, "ratedSpeedRpm", ratedSpeedRpm, "100000");
+        zeroOrAtLeastOne(c, "maxSpeedRpm", maxSpeedRpm, "200000");
+        c.throwIfAny();
+    }
+
+    private static void zeroOrAtLeastOne(Checks c, String field, double rpm, String top) {
+        if (rpm > 0 && rpm < SpeedRange.MIN_SPEED_RPM) {
+            c.require(false, field, rpm, "must be 0 (from the speed range) or at least " + SpeedRange.MIN_SPEED_RPM
+                    + " rpm", "0, or " + SpeedRange.MIN_SPEED_RPM + " to " + top);
+        }
     }
 
     /** The rated speed in use, rpm. */

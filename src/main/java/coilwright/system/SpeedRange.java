@@ -12,9 +12,16 @@ import coilwright.validation.Checks;
 public record SpeedRange(double minRpm, double maxRpm, int points) {
     public static final int MAX_POINTS = 1000;
 
+    /** Slowest top of a range, and slowest given speed, rpm: below it frequencies and drag figures underflow. */
+    public static final double MIN_SPEED_RPM = 1;
+
     public SpeedRange {
         Checks c = new Checks().range("minRpm", minRpm, 0, 100_000).range("maxRpm", maxRpm, 0, 100_000)
                 .intRange("points", points, 2, MAX_POINTS);
+        if (!c.hasErrors()) {
+            c.require(maxRpm >= MIN_SPEED_RPM, "maxRpm", maxRpm, "must be at least " + MIN_SPEED_RPM + " rpm",
+                    MIN_SPEED_RPM + " to 100000");
+        }
         if (!c.hasErrors()) {
             c.require(maxRpm > minRpm, "maxRpm", maxRpm, "must be above minRpm = " + Checks.fmt(minRpm)
                     + " (the range is empty or reversed)", "> minRpm");

@@ -60,4 +60,13 @@ class WindageReferenceTest {
         double w = 300;
         assertTrue(Windage.enclosedDiscTorqueNm(0.2, 0.05, w, RHO, NU) < Windage.freeDiscTorqueNm(0.2, w, RHO, NU));
     }
+
+    @Test
+    void a_speed_so_small_its_reynolds_number_underflows_has_no_windage_rather_than_a_non_finite_one() {
+        double tiny = Double.MIN_VALUE * 1e10;
+        assertEquals(0, Windage.freeDiscTorqueNm(0.2, tiny, 1.2, 1.5e-5));
+        assertEquals(0, Windage.enclosedDiscTorqueNm(0.2, 0.003, tiny, 1.2, 1.5e-5));
+        assertEquals(0, Windage.airGapCylinderTorqueNm(0.07, 0.08, 0.001, tiny, 1.2, 1.5e-5));
+    }
+
 }

@@ -63,6 +63,14 @@ class EvaluateApiTest {
         assertEquals(closedForm, solved, 0.005 * closedForm, "closed-form vs solved cut-in");
     }
 
+    @ParameterizedTest
+    @ValueSource(strings = {"ratedSpeedRpm", "maxSpeedRpm"})
+    void a_given_speed_so_small_its_angular_speed_underflows_is_refused_under_its_own_name(String field) {
+        // found by the request fuzz test: 4.9e-324 rpm made the windage 0 x infinity and the answer a 500
+        post(PATH, Bodies.exampleDesign(AXIAL).set(field, Double.MIN_VALUE).json())
+                .then().statusCode(400).body("errors[0].field", org.hamcrest.Matchers.endsWith(field));
+    }
+
     @Test
     void above_cut_in_the_battery_takes_more_power_as_speed_rises_and_nothing_below() {
         JsonPath json = post(PATH, Bodies.exampleDesign(AXIAL).json()).then().statusCode(200).extract().jsonPath();

@@ -51,7 +51,9 @@ final class ServerProcess implements AutoCloseable {
                 "-Xmx256m"));
         cmd.addAll(jvmOptions);
         cmd.addAll(List.of("-cp", System.getProperty("java.class.path"), "coilwright.App",
-                "--port", Integer.toString(port), "--data-dir", dataDir.toString()));
+                "--port", Integer.toString(port), "--data-dir", dataDir.toString(),
+                // the loops' writer threads must all be admitted: a busy 503 is not an acknowledgement to count
+                "--max-busy", "64"));
         cmd.addAll(serverOptions);
         Process p = new ProcessBuilder(cmd).redirectErrorStream(true).redirectOutput(log.toFile()).start();
         return new ServerProcess(p, port, log);
