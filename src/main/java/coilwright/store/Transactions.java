@@ -21,7 +21,10 @@ import java.util.Set;
 final class Transactions {
     private static final Set<String> TRANSIENT = Set.of("23505", "40001", "40P01", "HYT00", "90131");
     private static final Set<String> UNAVAILABLE = Set.of("57P01", "57P02", "57P03", "53300");
-    private static final int MAX_ATTEMPTS = 8;
+    /** Attempts of a transaction that meets a transient conflict; with the growing pauses about 2 s in all. */
+    private static final int MAX_ATTEMPTS = 16;
+    /** Longest pause between two attempts, ms. */
+    private static final long MAX_PAUSE_MS = 200;
 
     @FunctionalInterface
     interface Work<T> {
@@ -40,8 +43,13 @@ final class Transactions {
             try {
                 return once(work);
             } catch (SQLException e) {
-                if (attempt >= MAX_ATTEMPTS || !isTransient(e)) {
+                if (!isTransient(e)) {
                     throw failure(what, e);
+                }
+                if (attempt >= MAX_ATTEMPTS) {
+                    // still conflicting after ~2 s (many writers on one design, or a cold start after a crash): the
+                    // caller may try again, so this is "unavailable for now" (503 + Retry-After), not a server error
+                    throw new StoreUnavailableException(what + " kept meeting concurrent writers: " + e.getMessage(), e);
                 }
                 pause(attempt);
             }
@@ -109,7 +117,8 @@ final class Transactions {
 
     private static void pause(int attempt) {
         try {
-            Thread.sleep(java.util.concurrent.ThreadLocalRandom.current().nextLong(1, 5L * attempt + 2));
+            long ceiling = Math.min(MAX_PAUSE_MS, 1L << Math.min(attempt, 20)); // exponential back-off with jitter
+            Thread.sleep(java.util.concurrent.ThreadLocalRandom.current().nextLong(1, ceiling + 2));
         } catch (InterruptedException e) {
             Thread.currentThread().interrupt();
             throw new StoreException("interrupted while retrying a transaction", e);

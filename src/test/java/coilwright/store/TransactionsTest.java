@@ -35,4 +35,24 @@ class TransactionsTest {
             assertEquals("saving failed: x", e.getMessage());
         }
     }
+
+    @org.junit.jupiter.api.Test
+    void a_conflict_that_outlasts_every_retry_is_unavailable_for_now_and_a_passing_one_commits() {
+        org.h2.jdbcx.JdbcDataSource ds = new org.h2.jdbcx.JdbcDataSource();
+        ds.setURL("jdbc:h2:mem:transactions-test;DB_CLOSE_DELAY=-1");
+        Transactions tx = new Transactions(ds);
+        java.util.concurrent.atomic.AtomicInteger attempts = new java.util.concurrent.atomic.AtomicInteger();
+        assertThrows(StoreUnavailableException.class, () -> tx.inTransaction("revising", c -> {
+            attempts.incrementAndGet();
+            throw new SQLException("concurrent update", "40001");
+        }));
+        assertTrue(attempts.get() > 8, "retried patiently: " + attempts.get());
+        java.util.concurrent.atomic.AtomicInteger second = new java.util.concurrent.atomic.AtomicInteger();
+        assertEquals(3, tx.inTransaction("revising", c -> {
+            if (second.incrementAndGet() < 3) {
+                throw new SQLException("duplicate number", "23505");
+            }
+            return second.get();
+        }));
+    }
 }
