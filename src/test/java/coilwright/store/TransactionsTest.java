@@ -48,11 +48,12 @@ class TransactionsTest {
         }));
         assertTrue(attempts.get() > 8, "retried patiently: " + attempts.get());
         java.util.concurrent.atomic.AtomicInteger second = new java.util.concurrent.atomic.AtomicInteger();
-        assertEquals(3, tx.inTransaction("revising", c -> {
+        int committedOnAttempt = tx.inTransaction("revising", c -> {
             if (second.incrementAndGet() < 3) {
                 throw new SQLException("duplicate number", "23505");
             }
             return second.get();
-        }));
+        });
+        assertEquals(3, committedOnAttempt);
     }
 }
