@@ -8,9 +8,15 @@ import java.nio.file.Path;
 import java.time.Duration;
 import java.util.Comparator;
 import java.util.stream.Stream;
+import org.openqa.selenium.By;
+import org.openqa.selenium.JavascriptExecutor;
+import org.openqa.selenium.WebDriver;
+import org.openqa.selenium.WebElement;
 import org.openqa.selenium.chrome.ChromeDriver;
 import org.openqa.selenium.chrome.ChromeDriverService;
 import org.openqa.selenium.chrome.ChromeOptions;
+import org.openqa.selenium.support.ui.ExpectedConditions;
+import org.openqa.selenium.support.ui.WebDriverWait;
 
 /**
  * Headless Debian Chromium for page tests, driven through the system chromedriver so Selenium Manager
@@ -20,6 +26,8 @@ import org.openqa.selenium.chrome.ChromeOptions;
 public final class Browser implements AutoCloseable {
     public static final String CHROMIUM = "/usr/bin/chromium";
     public static final String CHROMEDRIVER = "/usr/bin/chromedriver";
+
+    private static final Duration NAVIGATION_TIMEOUT = Duration.ofSeconds(60);
 
     private final ChromeDriver driver;
     private final Path profile;
@@ -52,6 +60,25 @@ public final class Browser implements AutoCloseable {
         } catch (IOException e) {
             throw new UncheckedIOException(e);
         }
+    }
+
+    /**
+     * Clicks a link or submit button and returns once the page it loads has replaced the current one and finished
+     * loading. A bare {@code click()} on a form's button may return before the browser has left the old page, and
+     * the next lookup then finds (or, a moment later, loses) an element of the page being replaced.
+     */
+    public static void follow(WebDriver d, WebElement target) {
+        WebElement oldPage = d.findElement(By.tagName("html"));
+        ((JavascriptExecutor) d).executeScript("arguments[0].scrollIntoView({block: 'center'});", target);
+        target.click();
+        WebDriverWait wait = new WebDriverWait(d, NAVIGATION_TIMEOUT);
+        wait.until(ExpectedConditions.stalenessOf(oldPage));
+        wait.until(x -> "complete".equals(((JavascriptExecutor) x).executeScript("return document.readyState")));
+    }
+
+    /** {@link #follow(WebDriver, WebElement)} for the first element the CSS selector finds. */
+    public static void follow(WebDriver d, String css) {
+        follow(d, d.findElement(By.cssSelector(css)));
     }
 
     public ChromeDriver driver() {

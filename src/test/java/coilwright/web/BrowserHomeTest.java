@@ -36,7 +36,7 @@ class BrowserHomeTest {
         try (Browser browser = Browser.open()) {
             var driver = browser.driver();
             driver.get(APP.url("/"));
-            driver.findElement(By.linkText("imperial")).click();
+            Browser.follow(driver, driver.findElement(By.linkText("imperial")));
             driver.get(APP.url("/"));
             assertEquals("current", driver.findElement(By.linkText("imperial")).getAttribute("class"));
         }

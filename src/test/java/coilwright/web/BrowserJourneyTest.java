@@ -41,10 +41,9 @@ class BrowserJourneyTest {
         input.sendKeys(text);
     }
 
+    /** Every click in these journeys loads a page; the next step waits for it. */
     private static void click(ChromeDriver d, String css) {
-        WebElement e = d.findElement(By.cssSelector(css));
-        ((JavascriptExecutor) d).executeScript("arguments[0].scrollIntoView({block: 'center'});", e);
-        e.click();
+        Browser.follow(d, css);
     }
 
     private static void screenshot(ChromeDriver d, String name) {

@@ -61,14 +61,14 @@ class BrowserDesignTest {
         try (Browser browser = Browser.open()) {
             ChromeDriver d = browser.driver();
             d.get(APP.url("/"));
-            d.findElement(By.linkText("Start a design")).click();
+            Browser.follow(d, d.findElement(By.linkText("Start a design")));
             choose(d, "topology", "Axial flux, dual rotor (air-cored coils)");
             type(d, "alternator.turnsPerCoil", "45");
             choose(d, "alternator.rotor.gradeName", "N45");
             type(d, "alternator.rotor.magnetThicknessM", "12");
             choose(d, "loadType", "Battery through a diode bridge");
             type(d, "load.battery.cells", "12");
-            d.findElement(By.cssSelector("button[type=submit]")).click();
+            Browser.follow(d, "button[type=submit]");
             d.manage().window().setSize(new Dimension(1300, 6000));
             screenshot(d, "results-battery");
             elementShot(d, "main", "results-battery-main");
@@ -88,7 +88,7 @@ class BrowserDesignTest {
             choose(d, "loadType", "Resistor bank (star)");
             type(d, "alternator.turnsPerCoil", "20");
             type(d, "alternator.wire.awg", "18");
-            d.findElement(By.cssSelector("button[type=submit]")).click();
+            Browser.follow(d, "button[type=submit]");
             d.manage().window().setSize(new Dimension(1300, 6000));
             screenshot(d, "results-resistor");
             elementShot(d, ".summary", "results-resistor-summary");
@@ -108,7 +108,7 @@ class BrowserDesignTest {
             d.get(APP.url("/winding"));
             type(d, "slots", "12");
             type(d, "poles", "10");
-            d.findElement(By.cssSelector("button[type=submit]")).click();
+            Browser.follow(d, "button[type=submit]");
             d.manage().window().setSize(new Dimension(1300, 2600));
             screenshot(d, "winding-12s10p");
             // source: El-Refaie, IEEE Trans. Ind. Electron. 57(1), 2010: 12 slots / 10 poles double layer kw1 = 0.933

@@ -25,14 +25,14 @@ class BrowserRewindTest {
             WebElement poles = driver.findElement(By.id("machine.poles"));
             poles.clear();
             poles.sendKeys("14");
-            driver.findElement(By.cssSelector("form[action='/rewind'] button[type=submit]")).click();
+            Browser.follow(driver, "form[action='/rewind'] button[type=submit]");
             WebElement error = driver.findElement(By.id("machine.poles-error"));
             assertTrue(error.getText().contains("implies 16 poles"), error.getText());
 
             poles = driver.findElement(By.id("machine.poles"));
             poles.clear();
             poles.sendKeys("16");
-            driver.findElement(By.cssSelector("form[action='/rewind'] button[type=submit]")).click();
+            Browser.follow(driver, "form[action='/rewind'] button[type=submit]");
             assertTrue(driver.findElements(By.cssSelector(".error-summary")).isEmpty());
             assertEquals(6, driver.findElements(By.cssSelector("#reconnections tr")).size() - 1,
                     "star and delta for 1, 2 and 4 paths");

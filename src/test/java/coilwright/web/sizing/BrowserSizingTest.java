@@ -34,7 +34,7 @@ class BrowserSizingTest {
         try (Browser browser = Browser.open()) {
             ChromeDriver d = browser.driver();
             d.get(APP.url("/"));
-            d.findElement(By.linkText("Size an alternator")).click();
+            Browser.follow(d, d.findElement(By.linkText("Size an alternator")));
             type(d, "rotorDiameterM", "3");
             type(d, "batteryV", "24");
             type(d, "minPoles", "16");
@@ -58,7 +58,7 @@ class BrowserSizingTest {
             assertEquals("1", first.getAttribute("data-rank"), "back to best first");
 
             String tableCutIn = first.findElement(By.cssSelector("td.cut-in span")).getText();
-            first.findElement(By.cssSelector("form.open-design button")).click();
+            Browser.follow(d, first.findElement(By.cssSelector("form.open-design button")));
             String cutIn = d.findElement(By.cssSelector("#cut-in .value")).getText();
             assertTrue(cutIn.matches("\\d+ rpm"), cutIn);
             assertEquals(tableCutIn, cutIn, "the design page finds the cut-in the sizing found");
