@@ -25,6 +25,8 @@ import coilwright.winding.WindingSpec;
  * @param magnetTempC            working magnet temperature, C (-40 to 250)
  * @param measuredKeLineVPerRpm  a measured open-circuit line voltage per rpm (rms) that replaces the computed one; 0 = compute
  * @param phaseInductanceH       a measured phase inductance that replaces the estimate, H; 0 = estimate
+ * @param ambientTempC           temperature of the air around the machine, C (-40 to 60; absent from a document:
+ *                               {@link #DEFAULT_AMBIENT_TEMP_C}); the solved winding temperatures start from it
  */
 public record AlternatorSpec(
         WindingSpec winding,
@@ -38,7 +40,14 @@ public record AlternatorSpec(
         double windingTempC,
         double magnetTempC,
         double measuredKeLineVPerRpm,
-        double phaseInductanceH) {
+        double phaseInductanceH,
+        double ambientTempC) {
+    /** Ambient air temperature when none is stated, C (the issue's default; IEC 60034-1 rates machines for
+     *  coolant up to 40 C, so 25 C is a mild site: common practice). */
+    public static final double DEFAULT_AMBIENT_TEMP_C = 25.0;
+    /** Coldest and hottest ambient air the thermal networks take, C (their air property tables' range). */
+    public static final double MIN_AMBIENT_TEMP_C = -40.0;
+    public static final double MAX_AMBIENT_TEMP_C = 60.0;
     /**
      * Smallest measured line EMF constant, V/rpm: 1e-4 V/rpm gives 0.1 V at 1000 rpm, below any machine that
      * charges a battery (the electrical frequency a speed implies would otherwise leave every physical range).
@@ -60,7 +69,8 @@ public record AlternatorSpec(
                 .range("windingTempC", windingTempC, -40, 250)
                 .range("magnetTempC", magnetTempC, -40, 250)
                 .range("measuredKeLineVPerRpm", measuredKeLineVPerRpm, 0, 100)
-                .range("phaseInductanceH", phaseInductanceH, 0, 10);
+                .range("phaseInductanceH", phaseInductanceH, 0, 10)
+                .range("ambientTempC", ambientTempC, MIN_AMBIENT_TEMP_C, MAX_AMBIENT_TEMP_C);
         // 0 asks for the computed value; an entered one must be a machine's, not a rounding residue
         if (measuredKeLineVPerRpm > 0 && measuredKeLineVPerRpm < MIN_MEASURED_KE_V_PER_RPM) {
             c.require(false, "measuredKeLineVPerRpm", measuredKeLineVPerRpm, "must be 0 (computed) or between "
@@ -82,38 +92,52 @@ public record AlternatorSpec(
         c.throwIfAny();
     }
 
+    /** A machine in the default ambient air ({@link #DEFAULT_AMBIENT_TEMP_C}). */
+    public AlternatorSpec(WindingSpec winding, int turnsPerCoil, Connection connection, RotorSpec rotor,
+                          StatorSpec stator, WireSpec wire, Cooling cooling, ThermalClass insulationClass,
+                          double windingTempC, double magnetTempC, double measuredKeLineVPerRpm,
+                          double phaseInductanceH) {
+        this(winding, turnsPerCoil, connection, rotor, stator, wire, cooling, insulationClass, windingTempC,
+                magnetTempC, measuredKeLineVPerRpm, phaseInductanceH, DEFAULT_AMBIENT_TEMP_C);
+    }
+
+    public AlternatorSpec withAmbientTempC(double t) {
+        return new AlternatorSpec(winding, turnsPerCoil, connection, rotor, stator, wire, cooling, insulationClass,
+                windingTempC, magnetTempC, measuredKeLineVPerRpm, phaseInductanceH, t);
+    }
+
     public AlternatorSpec withTurnsPerCoil(int turns) {
         return new AlternatorSpec(winding, turns, connection, rotor, stator, wire, cooling, insulationClass,
-                windingTempC, magnetTempC, measuredKeLineVPerRpm, phaseInductanceH);
+                windingTempC, magnetTempC, measuredKeLineVPerRpm, phaseInductanceH, ambientTempC);
     }
 
     public AlternatorSpec withConnection(Connection c) {
         return new AlternatorSpec(winding, turnsPerCoil, c, rotor, stator, wire, cooling, insulationClass,
-                windingTempC, magnetTempC, measuredKeLineVPerRpm, phaseInductanceH);
+                windingTempC, magnetTempC, measuredKeLineVPerRpm, phaseInductanceH, ambientTempC);
     }
 
     public AlternatorSpec withWinding(WindingSpec w) {
         return new AlternatorSpec(w, turnsPerCoil, connection, rotor, stator, wire, cooling, insulationClass,
-                windingTempC, magnetTempC, measuredKeLineVPerRpm, phaseInductanceH);
+                windingTempC, magnetTempC, measuredKeLineVPerRpm, phaseInductanceH, ambientTempC);
     }
 
     public AlternatorSpec withWire(WireSpec w) {
         return new AlternatorSpec(winding, turnsPerCoil, connection, rotor, stator, w, cooling, insulationClass,
-                windingTempC, magnetTempC, measuredKeLineVPerRpm, phaseInductanceH);
+                windingTempC, magnetTempC, measuredKeLineVPerRpm, phaseInductanceH, ambientTempC);
     }
 
     public AlternatorSpec withWindingTempC(double t) {
         return new AlternatorSpec(winding, turnsPerCoil, connection, rotor, stator, wire, cooling, insulationClass,
-                t, magnetTempC, measuredKeLineVPerRpm, phaseInductanceH);
+                t, magnetTempC, measuredKeLineVPerRpm, phaseInductanceH, ambientTempC);
     }
 
     public AlternatorSpec withMeasuredKeLineVPerRpm(double ke) {
         return new AlternatorSpec(winding, turnsPerCoil, connection, rotor, stator, wire, cooling, insulationClass,
-                windingTempC, magnetTempC, ke, phaseInductanceH);
+                windingTempC, magnetTempC, ke, phaseInductanceH, ambientTempC);
     }
 
     public AlternatorSpec withPhaseInductanceH(double l) {
         return new AlternatorSpec(winding, turnsPerCoil, connection, rotor, stator, wire, cooling, insulationClass,
-                windingTempC, magnetTempC, measuredKeLineVPerRpm, l);
+                windingTempC, magnetTempC, measuredKeLineVPerRpm, l, ambientTempC);
     }
 }

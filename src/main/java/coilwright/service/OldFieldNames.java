@@ -1,6 +1,7 @@
 package coilwright.service;
 
 import coilwright.machine.AirCoredStator;
+import coilwright.machine.AlternatorSpec;
 import coilwright.magnet.AxialDualRotor;
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
@@ -25,6 +26,11 @@ import java.util.Map;
  *       {@code openingTaperM = coilHoleOuterWidthM - coilHoleInnerWidthM}. The mean turn computed from the
  *       converted values is the same to the last bit.</li>
  * </ul>
+ * API version 1.2 added {@code AlternatorSpec.ambientTempC}: a document written before it (saved designs, example
+ * files, request bodies that leave it out) reads as {@link AlternatorSpec#DEFAULT_AMBIENT_TEMP_C}, the ambient every
+ * earlier result assumed, so old revisions recompute to the figures they showed. This is a default, not a rename:
+ * it is not reported as a deprecated name.
+ * <p>
  * An object is only rewritten where the new names are absent; a document mixing old and new names for the same
  * thing keeps its old name, which the binder then reports as an unknown field.
  */
@@ -52,7 +58,7 @@ public final class OldFieldNames {
 
     /** True for the record types whose JSON had other names before. */
     public static boolean renamed(Class<?> type) {
-        return type == AxialDualRotor.class || type == AirCoredStator.class;
+        return type == AxialDualRotor.class || type == AirCoredStator.class || type == AlternatorSpec.class;
     }
 
     /** A cheap test before parsing: false when the text cannot hold any old name. */
@@ -69,6 +75,9 @@ public final class OldFieldNames {
      */
     public static List<Rename> upgrade(Class<?> type, ObjectNode node) {
         List<Rename> done = new ArrayList<>();
+        if (type == AlternatorSpec.class && !node.has("ambientTempC")) {
+            node.put("ambientTempC", AlternatorSpec.DEFAULT_AMBIENT_TEMP_C);
+        }
         if (type == AxialDualRotor.class) {
             ROTOR.forEach(pair -> rename(node, pair.get(0), pair.get(1), done));
         } else if (type == AirCoredStator.class) {

@@ -14,7 +14,6 @@ import coilwright.magnet.MagnetGrade;
 import coilwright.magnet.RadialSurfaceRotor;
 import coilwright.safety.Caution;
 import coilwright.safety.MachineLimitCautions;
-import coilwright.thermal.CoolingConditions;
 import org.apache.commons.math3.analysis.UnivariateFunction;
 import org.apache.commons.math3.analysis.solvers.BrentSolver;
 
@@ -52,7 +51,7 @@ public final class HeatAssessment {
      */
     public static HeatAndLosses assess(Alternator alt, Load load, List<Double> speedsRpm, double ratedRpm,
                                        double maxSpeedRpm) {
-        MachineLosses model = new MachineLosses(alt, load, CoolingConditions.DEFAULT_AMBIENT_C);
+        MachineLosses model = new MachineLosses(alt, load, alt.spec().ambientTempC());
         double top = MachineLosses.maxSpeedRpm(alt);
         List<Double> inRange = speedsRpm.stream().filter(s -> s <= top).toList();
         List<LossPoint> points = new ArrayList<>();

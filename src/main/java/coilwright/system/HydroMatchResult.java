@@ -27,6 +27,10 @@ import java.util.OptionalDouble;
  * @param alternatorCurve               the alternator's demand referred to the runner shaft
  * @param cautions                      safety cautions (open-circuit voltage at runaway first), most serious first
  * @param warnings                      matching and penstock advice
+ * @param heat                          steady winding temperature and every loss of the alternator at the matched
+ *                                      speed, the copper at the temperature its own losses heat it to in still air
+ *                                      at the ambient entered ({@link MachineLosses#steadyAt}); the matched point
+ *                                      itself keeps the winding temperature entered
  */
 public record HydroMatchResult(PenstockResult penstock, RunnerKind runnerKind, double runnerDiameterM,
                                double jetVelocityMs, double nozzleDiameterM, double hydraulicPowerW,
@@ -34,7 +38,7 @@ public record HydroMatchResult(PenstockResult penstock, RunnerKind runnerKind, d
                                double runawayAlternatorSpeedRpm, double openCircuitLineRmsVAtRunaway,
                                HydroOperatingPoint matched, double dailyEnergyKWh, OptionalDouble annualEnergyKWh,
                                List<RunnerCurvePoint> runnerCurve, List<LoadCurvePoint> alternatorCurve,
-                               List<Caution> cautions, List<String> warnings) {
+                               List<Caution> cautions, List<String> warnings, LossPoint heat) {
     public HydroMatchResult {
         runnerCurve = List.copyOf(runnerCurve);
         alternatorCurve = List.copyOf(alternatorCurve);

@@ -3,6 +3,7 @@ package coilwright.system;
 import coilwright.machine.Alternator;
 import coilwright.machine.AlternatorModel;
 import coilwright.safety.Caution;
+import coilwright.safety.MachineLimitCautions;
 import coilwright.turbine.CrossflowRunner;
 import coilwright.turbine.HydroRunner;
 import coilwright.turbine.ImpulseRunner;
@@ -69,9 +70,14 @@ public final class HydroMatcher {
         }
 
         double runawayAlt = runner.runawaySpeedRpm() * req.driveRatio();
-        List<Caution> cautions = AlternatorEvaluator.cautionsAt(alt, req.load(), runawayAlt,
+        List<Caution> cautions = new ArrayList<>(AlternatorEvaluator.cautionsAt(alt, req.load(), runawayAlt,
                 "the runner's runaway speed, reached whenever the load is lost", matched.powerToBatteryW(),
-                matched.dcCurrentA());
+                matched.dcCurrentA()));
+        LossPoint heat = heatAt(alt, req, matched.alternatorSpeedRpm());
+        MachineLimitCautions.windingTemperature(Math.min(heat.windingHotSpotC(), 1000), alt.spec().insulationClass(),
+                String.format(Locale.ROOT, "at the matched speed (%.0f rpm at the alternator)", heat.speedRpm()),
+                false).ifPresent(cautions::add);
+        cautions.sort(java.util.Comparator.comparing(Caution::severity));
         List<RunnerCurvePoint> runnerCurve = new ArrayList<>();
         List<LoadCurvePoint> altCurve = new ArrayList<>();
         for (int k = 0; k < CURVE_POINTS; k++) {
@@ -91,7 +97,16 @@ public final class HydroMatcher {
         return new HydroMatchResult(design, req.runner().kind(), diameterM, jetVelocity(runner), nozzleDiameter(runner),
                 runner.hydraulicPowerW(), runner.peakShaftPowerW(), runner.optimumSpeedRpm(), runner.runawaySpeedRpm(),
                 runawayAlt, curve.openCircuitLineRmsV(runawayAlt), matched, matched.powerToBatteryW() * 24.0 / 1000.0,
-                annual, runnerCurve, altCurve, cautions, warnings);
+                annual, runnerCurve, altCurve, cautions, warnings, heat);
+    }
+
+    /**
+     * The steady winding temperature and every loss at the matched alternator speed (a hydro plant runs at one point
+     * for days, so its steady temperature is the one the winding reaches), capped at the models' top speed.
+     */
+    static LossPoint heatAt(Alternator alt, HydroMatchRequest req, double alternatorRpm) {
+        return new MachineLosses(alt, req.load(), alt.spec().ambientTempC())
+                .steadyAt(Math.min(alternatorRpm, MachineLosses.maxSpeedRpm(alt)));
     }
 
     /**

@@ -102,12 +102,12 @@ public final class WindAssessment {
 
     /**
      * The steady winding temperature and every loss at the matched point of greatest battery power (the top of the
-     * matched curve), in still air at the default ambient.
+     * matched curve), in still air at the ambient temperature entered.
      */
     static LossPoint peakHeat(Alternator alt, coilwright.load.Load load, java.util.List<WindMatchPoint> points) {
         double altRpm = points.stream().max(java.util.Comparator.comparingDouble(WindMatchPoint::powerToBatteryW))
                 .map(WindMatchPoint::alternatorSpeedRpm).orElse(0.0);
-        return new MachineLosses(alt, load, coilwright.thermal.CoolingConditions.DEFAULT_AMBIENT_C)
+        return new MachineLosses(alt, load, alt.spec().ambientTempC())
                 .steadyAt(Math.min(altRpm, MachineLosses.maxSpeedRpm(alt)));
     }
 

@@ -18,6 +18,7 @@ import coilwright.web.NextSteps;
 import coilwright.web.NotFoundException;
 import coilwright.web.RecordBinder;
 import coilwright.web.pages.DesignEdit;
+import coilwright.web.units.Fmt;
 import coilwright.web.units.Units;
 import io.javalin.http.Context;
 import java.util.HashMap;
@@ -70,7 +71,8 @@ public final class MatchPages {
         WindMatchRequest req = new WindMatchRequest(design.alternator(), design.load(), f.rotor().toRotor(), f.site(),
                 f.wind(), 25.0);
         WindMatchResult result = matching.wind(req);
-        Map<String, Object> model = resultModel(ctx.path(), typed, units, design, result, MatchSummary.wind(result), Map.of(
+        Map<String, Object> model = resultModel(ctx.path(), typed, units, design, result, MatchSummary.wind(result, new Fmt(units),
+                design.alternator().ambientTempC()), Map.of(
                 "matchingChart", MatchCharts.windMatching(req.rotor(), result),
                 "powerChart", MatchCharts.windPowerCurve(result)));
         model.put("ratedChoices", RatedSpeed.wind(result));
@@ -96,7 +98,8 @@ public final class MatchPages {
         EvaluationRequest design = DesignEdit.withLoad(alternator(typed), typed, units);
         HydroMatchResult result = matching.hydro(new HydroMatchRequest(design.alternator(), design.load(), f.site(),
                 f.penstock(), f.runner(), f.driveRatio(), f.drivetrainEfficiency(), f.waterTempC()));
-        Map<String, Object> model = resultModel(ctx.path(), typed, units, design, result, MatchSummary.hydro(result),
+        Map<String, Object> model = resultModel(ctx.path(), typed, units, design, result, MatchSummary.hydro(result, new Fmt(units),
+                design.alternator().insulationClass(), design.alternator().ambientTempC()),
                 Map.of("matchingChart", MatchCharts.hydroMatching(result)));
         model.put("ratedChoices", RatedSpeed.hydro(result));
         ctx.render("match-hydro", model);

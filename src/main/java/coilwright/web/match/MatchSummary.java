@@ -1,9 +1,12 @@
 package coilwright.web.match;
 
+import coilwright.conductor.ThermalClass;
 import coilwright.system.HydroMatchResult;
+import coilwright.system.LossPoint;
 import coilwright.system.WindMatchResult;
 import coilwright.web.Figure;
 import coilwright.web.Words;
+import coilwright.web.units.Fmt;
 import java.util.List;
 import java.util.Locale;
 
@@ -12,7 +15,7 @@ final class MatchSummary {
     private MatchSummary() {
     }
 
-    static List<Figure> wind(WindMatchResult r) {
+    static List<Figure> wind(WindMatchResult r, Fmt fmt, double ambientC) {
         var energy = r.annualEnergy();
         return List.of(
                 Figure.of("air-density", "Air density", f("%.3f kg/m³", r.airDensityKgM3()), r.airDensitySource()),
@@ -24,9 +27,9 @@ final class MatchSummary {
                                 + r.starting().breakawayFrictionNm())),
                 Figure.of("annual-energy", "Annual energy to the battery", f("%.0f kWh", energy.annualEnergyKWh()),
                         f("%.2f kWh a day", energy.dailyEnergyKWh())),
-                Figure.of("peak-winding", "Winding at the top of the matched curve",
-                        f("%.0f °C", r.peakHeat().windingMeanC()), f("hot spot %.0f °C at %.0f rpm, still air at 25 °C",
-                                r.peakHeat().windingHotSpotC(), r.peakHeat().speedRpm())),
+                Figure.of("peak-winding", "Winding at the top of the matched curve", fmt.temp(r.peakHeat().windingMeanC()),
+                        "hot spot " + fmt.temp(r.peakHeat().windingHotSpotC()) + f(" at %.0f rpm, still air at ",
+                                r.peakHeat().speedRpm()) + fmt.temp(ambientC)),
                 Figure.of("delivered-energy", "After availability", f("%.0f kWh", r.deliveredAnnualEnergyKWh()),
                         f("available %.0f %% of the year", 100 * r.energyAssumptions().availability())),
                 Figure.of("capacity-factor", "Capacity factor", f("%.1f %%", 100 * energy.capacityFactor()),
@@ -36,8 +39,10 @@ final class MatchSummary {
                 Figure.of("wind-class", "Small wind class", r.windClass().note(), "IEC 61400-2, for context"));
     }
 
-    static List<Figure> hydro(HydroMatchResult r) {
+    static List<Figure> hydro(HydroMatchResult r, Fmt fmt, ThermalClass insulation, double ambientC) {
         var p = r.penstock();
+        LossPoint h = r.heat();
+        boolean hot = h.windingHotSpotC() > insulation.limitC();
         return List.of(
                 Figure.of("net-head", "Net head", f("%.2f m", p.netHeadM()), f("penstock efficiency %.1f %%; "
                                 + "Hazen-Williams friction %.2f m against Darcy-Weisbach %.2f m",
@@ -52,7 +57,16 @@ final class MatchSummary {
                         f("%.1f kWh a day", r.dailyEnergyKWh())),
                 Figure.of("annual-energy", "Annual energy", r.annualEnergyKWh().isPresent()
                         ? f("%.0f kWh", r.annualEnergyKWh().getAsDouble()) : "—", r.annualEnergyKWh().isPresent()
-                        ? "from the flow-duration curve" : "give a flow-duration curve"));
+                        ? "from the flow-duration curve" : "give a flow-duration curve"),
+                new Figure("hydro-winding", "Winding at the matched speed", (h.temperatureSettled() ? "" : "> ")
+                        + fmt.temp(h.windingMeanC()), "hot spot " + fmt.temp(h.windingHotSpotC()) + ", insulation class "
+                        + insulation.name() + " limit " + fmt.temp(insulation.limitC()) + ", still air at "
+                        + fmt.temp(ambientC), hot ? "bad" : "ok"),
+                Figure.of("hydro-losses", "Alternator losses at the matched speed", f("%.0f W", h.totalLossW()
+                        - h.diodeLossW() - h.cableLossW() - h.batteryInternalLossW()), f("copper %.0f W, iron %.0f W, "
+                        + "eddy %.0f W, delta %.0f W, bearings and windage %.0f W; efficiency every loss counted %.0f %%",
+                        h.windingCopperLossW(), h.statorIronLossW(), h.conductorEddyLossW(), h.deltaCirculationLossW(),
+                        h.bearingFrictionLossW() + h.windageLossW(), 100 * h.efficiency())));
     }
 
     private static String f(String format, Object... args) {

@@ -29,6 +29,7 @@ final class DesignFields {
         m.put("alternator.wire.bareDiameterM", Shown.MM);
         m.put("alternator.windingTempC", Shown.CELSIUS);
         m.put("alternator.magnetTempC", Shown.CELSIUS);
+        m.put("alternator.ambientTempC", Shown.CELSIUS);
         m.put("alternator.phaseInductanceH", Shown.MILLIHENRY);
         for (String cable : new String[] {"load.acCable.", "load.dcCable."}) {
             m.put(cable + "lengthM", Shown.METRE);
