@@ -162,6 +162,22 @@ public final class MachineLosses {
         return fixed.point(t);
     }
 
+    /**
+     * Running drag at the shaft, N m: bearing friction, windage, stator iron loss, conductor eddy loss and the delta
+     * circulating current at a speed with the winding at {@code windingC}, i.e. every loss that the load current does
+     * not cause; 0 at standstill (break-away friction and cogging are starting figures, see {@link HeatAssessment}).
+     *
+     * @param speedRpm shaft speed, rpm, 0 to {@link #maxSpeedRpm(Alternator)}
+     * @param windingC winding temperature, C
+     */
+    public double dragTorqueNm(double speedRpm, double windingC) {
+        if (speedRpm <= 0) {
+            return 0;
+        }
+        Fixed f = new Fixed(speedRpm);
+        return (f.ironW + f.bearingW + f.windageW + f.eddyW(windingC) + f.deltaW(windingC)) / (speedRpm * Math.PI / 30);
+    }
+
     /** Losses at one speed that do not depend on the winding temperature, and the ones that do. */
     private final class Fixed {
         private final double speedRpm;

@@ -72,7 +72,7 @@ public final class WindAssessment {
                 p.tipSpeedRatio(), windW > 0 ? p.rotorPowerW() / windW : 0, p.rotorPowerW(), p.drivetrainLossW(),
                 p.alternatorShaftPowerW(), p.powerToBatteryW(), p.windingCopperLossW(), p.cableLossW(),
                 p.batteryInternalLossW(), p.diodeLossW(), p.dcCurrentA(), p.idealRotorPowerW(), p.idealBatteryPowerW(),
-                p.captureRatio(), p.flags());
+                p.captureRatio(), p.flags(), p.alternatorDragLossW());
     }
 
     /**
@@ -92,7 +92,8 @@ public final class WindAssessment {
                 v -> distribution.cdf(v) - (1 - HARD_START_EXCEEDANCE), 0, MAX_WIND_MS);
         return new WindStart(cq0, "blade-element estimate at standstill for Glauert-optimum blades of the curve's "
                 + "best tip-speed ratio (Wood 2001), at most the curve's own Cp / lambda at zero", cogging.peakNm(),
-                friction.breakawayTorqueNm(), start, cutInWindSpeedMs.orElse(0), hard);
+                friction.breakawayTorqueNm(), start, cutInWindSpeedMs.orElse(0), hard,
+                cutInWindSpeedMs.isPresent() ? Math.max(start, cutInWindSpeedMs.getAsDouble()) : 0);
     }
 
     /** A caution when the rotor starts later than it would charge, or rarely starts at all. */

@@ -4,7 +4,8 @@ import java.util.List;
 
 /**
  * A wind rotor and its alternator at one wind speed. Power balance:
- * rotorPowerW = drivetrainLossW + powerToBatteryW + windingCopperLossW + cableLossW + batteryInternalLossW + diodeLossW.
+ * rotorPowerW = drivetrainLossW + powerToBatteryW + windingCopperLossW + cableLossW + batteryInternalLossW + diodeLossW
+ * + alternatorDragLossW.
  *
  * @param windSpeedMs             free-stream wind speed, m/s
  * @param rotorSpeedRpm           the rotor's running speed, rpm (held at the maximum speed when over-speed)
@@ -14,7 +15,7 @@ import java.util.List;
  * @param cp                      power coefficient delivered: rotor power over the wind's power through the swept area
  * @param rotorPowerW             power at the rotor shaft, W (when governed: only what the alternator takes)
  * @param drivetrainLossW         belt or gearbox loss, rotorPowerW x (1 - drivetrain efficiency), W
- * @param alternatorShaftPowerW   power into the alternator shaft, W
+ * @param alternatorShaftPowerW   power into the alternator shaft, W (its running drag included)
  * @param powerToBatteryW         power into the battery (or load resistors), W
  * @param windingCopperLossW      winding copper loss, W
  * @param cableLossW              AC plus DC cable loss, W
@@ -27,20 +28,23 @@ import java.util.List;
  *                                so powerToBatteryW / idealBatteryPowerW = captureRatio wherever the battery charges
  * @param captureRatio            rotorPowerW / idealRotorPowerW, 0 to 1: how much of the best the rotor delivers
  * @param flags                   FREE_SPINNING, STALL, OVER_SPEED as they apply
+ * @param alternatorDragLossW     the alternator's running drag (bearings, windage, iron, conductor eddy currents,
+ *                                delta circulating current) at the winding temperature entered, W
  */
 public record WindMatchPoint(double windSpeedMs, double rotorSpeedRpm, double alternatorSpeedRpm,
                              double unlimitedRotorSpeedRpm, double tipSpeedRatio, double cp, double rotorPowerW,
                              double drivetrainLossW, double alternatorShaftPowerW, double powerToBatteryW,
                              double windingCopperLossW, double cableLossW, double batteryInternalLossW,
                              double diodeLossW, double dcCurrentA, double idealRotorPowerW, double idealBatteryPowerW,
-                             double captureRatio, List<MatchFlag> flags) {
+                             double captureRatio, List<MatchFlag> flags, double alternatorDragLossW) {
     public WindMatchPoint {
         flags = List.copyOf(flags);
     }
 
     /** Every loss between the rotor shaft and the battery, W. */
     public double totalLossW() {
-        return drivetrainLossW + windingCopperLossW + cableLossW + batteryInternalLossW + diodeLossW;
+        return drivetrainLossW + windingCopperLossW + cableLossW + batteryInternalLossW + diodeLossW
+                + alternatorDragLossW;
     }
 
     public boolean has(MatchFlag flag) {

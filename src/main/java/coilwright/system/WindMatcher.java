@@ -14,6 +14,10 @@ import java.util.function.DoubleUnaryOperator;
  * actuator-disc power with a Cp curve ({@link WindRotor}); the alternator's torque comes from its solved
  * operating points ({@link AlternatorCurve}).
  *
+ * <p>Running drag ({@link RunningDrag}: bearings, windage, iron, conductor eddy currents, delta circulating current)
+ * adds to the alternator's torque when given, so the rotor turns slower below cut-in and charging starts at the wind
+ * that overcomes it.
+ *
  * <p>Over-speed: when that equilibrium lies above the rotor's maximum speed, the furling or governor is taken
  * to hold the rotor at the maximum speed, shedding the surplus; the alternator then delivers its output at that
  * speed and the rotor power reported is what the alternator takes. The unlimited equilibrium is reported too.
@@ -33,20 +37,29 @@ public final class WindMatcher {
     private final WindRotor rotor;
     private final double airDensityKgM3;
     private final double[] gridRpm;
+    private final RunningDrag drag;
+
+    /** As {@link #WindMatcher(AlternatorCurve, WindRotor, double, double, RunningDrag)} with no running drag. */
+    public WindMatcher(AlternatorCurve alternator, WindRotor rotor, double airDensityKgM3, double topWindSpeedMs) {
+        this(alternator, rotor, airDensityKgM3, topWindSpeedMs, RunningDrag.none());
+    }
 
     /**
      * @param alternator      the alternator and load as a torque curve
      * @param rotor           the wind rotor
      * @param airDensityKgM3  air density, kg/m^3, > 0 and <= 2
      * @param topWindSpeedMs  the highest wind speed to be matched, m/s, > 0 and <= 100 (sets the scan grid)
+     * @param drag            the alternator's running drag, added to its load torque
      */
-    public WindMatcher(AlternatorCurve alternator, WindRotor rotor, double airDensityKgM3, double topWindSpeedMs) {
-        new Checks().present("alternator", alternator).present("rotor", rotor)
+    public WindMatcher(AlternatorCurve alternator, WindRotor rotor, double airDensityKgM3, double topWindSpeedMs,
+                       RunningDrag drag) {
+        new Checks().present("alternator", alternator).present("rotor", rotor).present("drag", drag)
                 .rangeExclusiveMin("airDensityKgM3", airDensityKgM3, 0.0, 2.0)
                 .rangeExclusiveMin("topWindSpeedMs", topWindSpeedMs, 0.0, 100.0).throwIfAny();
         this.alternator = alternator;
         this.rotor = rotor;
         this.airDensityKgM3 = airDensityKgM3;
+        this.drag = drag;
         this.gridRpm = TorqueMatch.grid(rotor.alternatorSpeedRpm(rotor.freeSpinSpeedRpm(topWindSpeedMs)), GRID_STEPS);
     }
 
@@ -58,20 +71,24 @@ public final class WindMatcher {
     public WindMatchPoint at(double windSpeedMs) {
         new Checks().range("windSpeedMs", windSpeedMs, 0.0, 100.0).throwIfAny();
         if (windSpeedMs == 0.0) {
-            return new WindMatchPoint(0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, List.of());
+            return new WindMatchPoint(0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, List.of(), 0);
         }
         double v = windSpeedMs;
         double efficiency = rotor.drivetrainEfficiency();
         double freeSpinAltRpm = rotor.alternatorSpeedRpm(rotor.freeSpinSpeedRpm(v));
-        DoubleUnaryOperator residual = n -> rotor.alternatorShaftTorqueNm(v, n, airDensityKgM3) - alternator.torqueNm(n);
+        DoubleUnaryOperator residual = n -> rotor.alternatorShaftTorqueNm(v, n, airDensityKgM3) - alternator.torqueNm(n)
+                - drag.torqueNm(n);
         double equilibriumAltRpm = TorqueMatch.firstStableCrossingRpm(residual, gridRpm, freeSpinAltRpm);
         double unlimitedRotorRpm = rotor.rotorSpeedRpm(equilibriumAltRpm);
         boolean overSpeed = rotor.isOverSpeed(unlimitedRotorRpm);
         double rotorRpm = overSpeed ? rotor.maxRotorSpeedRpm() : unlimitedRotorRpm;
         SpeedPoint alt = alternator.at(rotor.alternatorSpeedRpm(rotorRpm));
+        double dragW = drag.powerW(alt.speedRpm());
+        double altShaftW = alt.shaftPowerW() + dragW;
         boolean freeSpinning = alt.shaftTorqueNm() == 0.0;
-        // free-spinning: Cp is zero at the runaway tip-speed ratio; the rotor delivers nothing (avoids rounding dust)
-        double rotorPowerW = overSpeed || freeSpinning ? alt.shaftPowerW() / efficiency
+        // free-spinning (no load current): the rotor delivers only what the drag takes, zero without drag (Cp is zero
+        // at the runaway tip-speed ratio; this avoids rounding dust)
+        double rotorPowerW = overSpeed || freeSpinning ? altShaftW / efficiency
                 : rotor.powerW(v, rotorRpm, airDensityKgM3);
         double tsr = rotor.tipSpeedRatio(v, rotorRpm);
 
@@ -86,13 +103,19 @@ public final class WindMatcher {
         }
 
         double idealRotorW = rotor.idealPowerW(v, airDensityKgM3);
-        double idealAltEfficiency = freeSpinning ? idealSpeedEfficiency(v) : alt.efficiency();
+        double idealAltEfficiency = freeSpinning ? idealSpeedEfficiency(v) : efficiencyWithDrag(alt);
         double capture = idealRotorW > 0 ? Math.min(1.0, rotorPowerW / idealRotorW) : 0.0;
         return new WindMatchPoint(v, rotorRpm, alt.speedRpm(), unlimitedRotorRpm, tsr,
                 rotorPowerW / rotor.windPowerW(v, airDensityKgM3), rotorPowerW, rotorPowerW * (1.0 - efficiency),
-                alt.shaftPowerW(), alt.powerToLoadW(), alt.windingCopperLossW(), alt.cableLossW(),
+                altShaftW, alt.powerToLoadW(), alt.windingCopperLossW(), alt.cableLossW(),
                 alt.batteryInternalLossW(), alt.diodeLossW(), alt.dcCurrentA(), idealRotorW,
-                idealRotorW * efficiency * idealAltEfficiency, capture, flags);
+                idealRotorW * efficiency * idealAltEfficiency, capture, flags, dragW);
+    }
+
+    /** Power to the load over the alternator's shaft power, its running drag counted (0 where nothing flows). */
+    private double efficiencyWithDrag(SpeedPoint alt) {
+        double shaft = alt.shaftPowerW() + drag.powerW(alt.speedRpm());
+        return shaft > 0 ? alt.powerToLoadW() / shaft : 0;
     }
 
     /** The alternator's efficiency at the speed of the ideal rotor (optimum tip-speed ratio, capped). */
@@ -101,7 +124,7 @@ public final class WindMatcher {
         if (rotor.maxRotorSpeedRpm() > 0) {
             idealRotorRpm = Math.min(idealRotorRpm, rotor.maxRotorSpeedRpm());
         }
-        return alternator.at(rotor.alternatorSpeedRpm(idealRotorRpm)).efficiency();
+        return efficiencyWithDrag(alternator.at(rotor.alternatorSpeedRpm(idealRotorRpm)));
     }
 
     /**
@@ -129,7 +152,8 @@ public final class WindMatcher {
         SpeedPoint p = alternator.at(alternatorRpm);
         double eta = rotor.drivetrainEfficiency();
         return new LoadCurvePoint(rotor.rotorSpeedRpm(alternatorRpm), alternatorRpm,
-                p.shaftTorqueNm() * rotor.driveRatio() / eta, p.shaftPowerW() / eta, p.powerToLoadW());
+                (p.shaftTorqueNm() + drag.torqueNm(alternatorRpm)) * rotor.driveRatio() / eta,
+                (p.shaftPowerW() + drag.powerW(alternatorRpm)) / eta, p.powerToLoadW());
     }
 
     public WindRotor rotor() {

@@ -48,7 +48,7 @@ public final class WindMatching {
         WindRotor rotor = req.rotor();
         double rho = req.site().effectiveAirDensityKgM3();
         AlternatorCurve curve = new AlternatorCurve(alt, req.load());
-        WindMatcher matcher = new WindMatcher(curve, rotor, rho, req.maxWindSpeedMs());
+        WindMatcher matcher = new WindMatcher(curve, rotor, rho, req.maxWindSpeedMs(), RunningDrag.of(alt, req.load()));
         List<WindMatchPoint> points = new ArrayList<>();
         FurlingControl control = WindAssessment.control(req);
         for (double v : req.windSpeedsMs()) {

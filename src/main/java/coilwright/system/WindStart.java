@@ -9,11 +9,14 @@ package coilwright.system;
  * @param coggingPeakNm             peak cogging torque at the alternator shaft, N m (0 for air-cored stators)
  * @param breakawayFrictionNm       break-away bearing friction at the alternator shaft, N m
  * @param startsTurningAtMs         steady wind speed at which the rotor starts to turn from rest, m/s
- * @param chargingStartsAtMs        wind speed at which charging begins once turning (the matched cut-in), m/s
+ * @param chargingStartsAtMs        wind speed at which charging begins once turning (the matched cut-in, the
+ *                                  alternator's running drag counted), m/s
  * @param hardStartWindMs           wind speed exceeded only {@link WindAssessment#HARD_START_EXCEEDANCE} of the
  *                                  time at the site: a rotor needing more rarely starts there, m/s
+ * @param chargesFromRestAtMs       the real start on a rising wind from rest: the rotor must first break away, then
+ *                                  reach cut-in, so the larger of the two, m/s (0 when it never charges)
  */
 public record WindStart(double startingTorqueCoefficient, String coefficientBasis, double coggingPeakNm,
                         double breakawayFrictionNm, double startsTurningAtMs, double chargingStartsAtMs,
-                        double hardStartWindMs) {
+                        double hardStartWindMs, double chargesFromRestAtMs) {
 }

@@ -20,7 +20,11 @@ final class MatchSummary {
         return List.of(
                 Figure.of("air-density", "Air density", f("%.3f kg/m³", r.airDensityKgM3()), r.airDensitySource()),
                 Figure.of("cut-in", "Charging starts at", r.cutInWindSpeedMs().isPresent()
-                        ? f("%.1f m/s", r.cutInWindSpeedMs().getAsDouble()) : "never", "wind speed"),
+                        ? f("%.1f m/s", r.cutInWindSpeedMs().getAsDouble()) : "never",
+                        "once turning; the alternator's running drag (bearings, windage, iron, eddy currents) counted"),
+                Figure.of("charges-from-rest", "On a rising wind from rest, charging starts at",
+                        r.starting().chargesFromRestAtMs() > 0 ? f("%.1f m/s", r.starting().chargesFromRestAtMs())
+                                : "never", "the rotor must first break away, then reach cut-in"),
                 Figure.of("starts-turning", "Starts turning from rest at",
                         f("%.1f m/s", r.starting().startsTurningAtMs()),
                         f("against %.2f N·m of cogging and bearing friction", r.starting().coggingPeakNm()
