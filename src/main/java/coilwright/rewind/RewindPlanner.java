@@ -1,6 +1,9 @@
 package coilwright.rewind;
 
+import coilwright.conductor.BandTemperature;
+import coilwright.conductor.Cooling;
 import coilwright.conductor.Copper;
+import coilwright.machine.AlternatorSpec;
 import coilwright.machine.Connection;
 
 import java.util.ArrayList;
@@ -21,6 +24,11 @@ import java.util.Optional;
 public final class RewindPlanner {
     /** kw3 above which a delta option carries a circulating-current caution. */
     static final double DELTA_KW3_CAUTION = 0.01;
+    /** Cooling assumed for the temperature estimate of a rewind: an open, self-ventilated frame, as motors and car
+     *  alternators have (its band 4 to 6 A/mm^2, from memory: see {@link Cooling}). */
+    public static final Cooling ASSUMED_COOLING = Cooling.OPEN_VENTILATED;
+    /** Ambient of the temperature estimate, C. */
+    public static final double ASSUMED_AMBIENT_C = AlternatorSpec.DEFAULT_AMBIENT_TEMP_C;
     /** Deviations closer than this count as equal when ranking. */
     static final double RANK_RESOLUTION = 1e-9;
 
@@ -65,7 +73,12 @@ public final class RewindPlanner {
                 machine.coilWindow().isEmpty()
                         ? "coil window unknown: fill is given relative to the present coil (wireAreaRatio; 1 = as now)"
                         : "fill checked against the stated coil window",
-                outputNote(ch, target));
+                outputNote(ch, target),
+                String.format(Locale.ROOT, "winding temperature: estimated from the current density alone, the rise "
+                        + "scaled by rho(T) J^2 so that the top of the %.0f to %.0f A/mm^2 band of an open, "
+                        + "self-ventilated frame gives the class B rise of %.0f K (IEC 60034-1), in %.0f C air; about "
+                        + "+-30 %% of the rise", ASSUMED_COOLING.lowAPerMm2(), ASSUMED_COOLING.highAPerMm2(),
+                        BandTemperature.REFERENCE_RISE_K, ASSUMED_AMBIENT_C));
         return new RewindPlan(ch, target, wantedKe, ch.keLineRmsVPerRpm().relativeUncertainty(), reconnections,
                 rewinds, notes);
     }
@@ -134,8 +147,19 @@ public final class RewindPlanner {
             double achieved = target.achieved(ke);
             double area = machine.wire().conductorCopperAreaM2() * machine.turnsPerCoil() / turns;
             List<WireChoice> wires = WireChoices.forArea(machine, ch, target, conn, turns, paths, ke, area);
+            Optional<WireChoice> closest = wires.stream().filter(w -> w.currentDensityAPerMm2().isPresent())
+                    .min(Comparator.comparingDouble(w -> Math.abs(Math.log(w.conductorCopperAreaM2() / area))));
+            Optional<Double> density = closest.flatMap(WireChoice::currentDensityAPerMm2);
+            List<String> notes = new ArrayList<>(notes(ch, conn));
+            density.filter(j -> j > ASSUMED_COOLING.highAPerMm2()).ifPresent(j -> notes.add(String.format(Locale.ROOT,
+                    "current density %.1f A/mm^2 at the working speed is above the %.0f to %.0f A/mm^2 usual for an "
+                            + "open, self-ventilated frame: the winding runs hot%s", j, ASSUMED_COOLING.lowAPerMm2(),
+                    ASSUMED_COOLING.highAPerMm2(), closest.flatMap(WireChoice::windingTemperatureC)
+                            .map(t -> String.format(Locale.ROOT, " (about %.0f C)", t))
+                            .orElse(" (no steady temperature: it keeps heating)"))));
             out.add(new RewindOption(conn, paths, turns, exact, ch.coilsPerPhase() * turns / paths, ke, achieved,
-                    achieved / target.wanted() - 1, ke * target.targetSpeedRpm(), area, wires, notes(ch, conn)));
+                    achieved / target.wanted() - 1, ke * target.targetSpeedRpm(), area, wires, notes, density,
+                    closest.flatMap(WireChoice::windingTemperatureC)));
         }
         return out;
     }

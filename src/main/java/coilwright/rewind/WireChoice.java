@@ -20,8 +20,14 @@ import java.util.Optional;
  * @param fill                 fill check against the coil window (if the window was given)
  * @param output               charging at the target speed with this wire (battery target with measured
  *                             resistance and inductance only)
+ * @param currentDensityAPerMm2 rms current density in the copper at the target speed, A/mm^2 (with output only)
+ * @param windingTemperatureC  estimated steady mean winding temperature there, C ({@link
+ *                             coilwright.conductor.BandTemperature} for {@link RewindPlanner#ASSUMED_COOLING} at
+ *                             {@link RewindPlanner#ASSUMED_AMBIENT_C}); empty without output, or when no steady
+ *                             temperature exists
  */
 public record WireChoice(String role, WireSpec wire, double conductorCopperAreaM2, double copperAreaRatio,
                          double wireAreaRatio, Optional<Double> phaseResistanceOhm, Optional<FillCheck> fill,
-                         Optional<OutputEstimate> output) {
+                         Optional<OutputEstimate> output, Optional<Double> currentDensityAPerMm2,
+                         Optional<Double> windingTemperatureC) {
 }

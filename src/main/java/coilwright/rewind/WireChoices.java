@@ -1,5 +1,6 @@
 package coilwright.rewind;
 
+import coilwright.conductor.BandTemperature;
 import coilwright.conductor.Copper;
 import coilwright.conductor.FillCheck;
 import coilwright.conductor.WireCatalogue;
@@ -65,7 +66,15 @@ final class WireChoices {
         int nPh = ch.coilsPerPhase() * turnsPerCoil / parallelPaths;
         Optional<OutputEstimate> output = OutputEstimator.at(machine, ch, o.target(), o.conn(), o.keLineRmsVPerRpm(),
                 nPh, r);
-        return new WireChoice(role, wire, wire.conductorCopperAreaM2(), copperRatio, wireRatio, r, fill, output);
+        Optional<Double> density = output.map(out -> out.phaseCurrentRmsA() / parallelPaths
+                / (wire.conductorCopperAreaM2() * 1e6));
+        Optional<Double> temperature = density.flatMap(j -> {
+            var t = BandTemperature.windingC(Math.min(j, 100), RewindPlanner.ASSUMED_COOLING,
+                    RewindPlanner.ASSUMED_AMBIENT_C);
+            return t.isPresent() ? Optional.of(t.getAsDouble()) : Optional.empty();
+        });
+        return new WireChoice(role, wire, wire.conductorCopperAreaM2(), copperRatio, wireRatio, r, fill, output,
+                density, temperature);
     }
 
     /** R_ph = rho(T) N_c C MLT / (A a^2), Ohm. */

@@ -46,9 +46,9 @@ class RunningDragTest {
 
     @Test
     void below_cut_in_the_rotor_settles_where_its_torque_equals_the_drag_slower_than_free_spinning() {
-        // source: steady rotation is a torque balance, rotor torque x drivetrain efficiency / ratio = generator torque
-        // (Manwell, McGowan & Rogers, Wind Energy Explained, 2nd ed. 2009, sec. 7.6 on rotor-generator matching);
-        // the root is found to TorqueMatch.ABSOLUTE_ACCURACY_RPM, so the balance holds to the torque slope times that
+        // source: Newton's second law for rotation at steady speed, J dw/dt = T_rotor - T_load = 0 (Halliday, Resnick
+        // & Walker, Fundamentals of Physics, ch. 10); the root is found to TorqueMatch.ABSOLUTE_ACCURACY_RPM, so the
+        // balance holds to the torque slope times that, far inside 1e-6
         WindRotor rotor = MatchFixtures.rotor();
         RunningDrag d = drag();
         double v = 1.0;
