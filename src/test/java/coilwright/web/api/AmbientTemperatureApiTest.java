@@ -40,7 +40,7 @@ class AmbientTemperatureApiTest {
         Response r = ProblemAssertions.post(PATH, Bodies.exampleDesign("radial-hydro-48v")
                 .set("alternator.ambientTempC", 61.5).json());
         ProblemAssertions.assertOneInvalidField(r, PATH, "alternator.ambientTempC", "61.5",
-                "alternator.ambientTempC = 61.5: must be between -40 and 60", "-40 to 60");
+                "alternator.ambientTempC = 61.5: must be between -40.0 and 60.0", "-40.0 to 60.0");
     }
 
     @Test
