@@ -121,6 +121,10 @@ public final class OldFieldNames {
             if (record != null) {
                 upgrade(record, object).forEach(r -> done.add(new Rename(path, r.oldNames(), r.newNames())));
             }
+            if (record == null && (path.equals("alternator") || path.endsWith(".alternator"))
+                    && object.has("turnsPerCoil")) {
+                upgrade(AlternatorSpec.class, object); // the machine carries no "type": found by its place
+            }
             for (Iterator<Map.Entry<String, JsonNode>> it = object.fields(); it.hasNext(); ) {
                 Map.Entry<String, JsonNode> e = it.next();
                 walk(e.getValue(), path.isEmpty() ? e.getKey() : path + "." + e.getKey(), done);
