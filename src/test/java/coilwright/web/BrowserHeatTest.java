@@ -83,7 +83,7 @@ class BrowserHeatTest {
             Browser.follow(d, "form[action='/match/hydro'] button[type=submit]");
             screenshot(d, "hydro");
             String winding = d.findElement(By.cssSelector("#hydro-winding .value")).getText();
-            assertTrue(winding.matches(">? ?\\d+ °C"), winding);
+            assertTrue(winding.matches("(> )?[\\d.]+ °C"), winding);
             assertTrue(d.findElement(By.cssSelector("#hydro-losses .value")).getText().matches("\\d+ W"));
 
             nav(d, "/match/wind");
