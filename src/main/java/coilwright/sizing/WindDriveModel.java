@@ -231,7 +231,8 @@ final class WindDriveModel implements DriveModel {
         double cutIn = AlternatorEvaluator.closedFormCutInRpm(alt, load);
         WindMatchResult r;
         try {
-            r = WindMatching.match(alt, drive.matchRequest(alt.spec(), load));
+            // without the running drag for now: the worked example's hand calculation and the sizing tests are drag-free
+            r = WindMatching.matchWithoutDrag(alt, drive.matchRequest(alt.spec(), load));
         } catch (InfeasibleDesignException e) {
             return FullEvaluation.neverCharges(alt, cutIn, alt.emfLineRmsV(checkSpeedRpm), checkSpeedRpm,
                     AlternatorEvaluator.cautionsAt(alt, load, checkSpeedRpm, checkSpeedSource, 0, 0));

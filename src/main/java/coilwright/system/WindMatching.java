@@ -45,10 +45,22 @@ public final class WindMatching {
 
     /** As {@link #match(WindMatchRequest)} with an already-built alternator. */
     public static WindMatchResult match(Alternator alt, WindMatchRequest req) {
+        return match(alt, req, RunningDrag.of(alt, req.load()));
+    }
+
+    /**
+     * As {@link #match(Alternator, WindMatchRequest)} with the electrical torque alone (no running drag): the design
+     * search's full model, whose worked example and limits were set before the drag was counted.
+     */
+    public static WindMatchResult matchWithoutDrag(Alternator alt, WindMatchRequest req) {
+        return match(alt, req, RunningDrag.none());
+    }
+
+    private static WindMatchResult match(Alternator alt, WindMatchRequest req, RunningDrag drag) {
         WindRotor rotor = req.rotor();
         double rho = req.site().effectiveAirDensityKgM3();
         AlternatorCurve curve = new AlternatorCurve(alt, req.load());
-        WindMatcher matcher = new WindMatcher(curve, rotor, rho, req.maxWindSpeedMs(), RunningDrag.of(alt, req.load()));
+        WindMatcher matcher = new WindMatcher(curve, rotor, rho, req.maxWindSpeedMs(), drag);
         List<WindMatchPoint> points = new ArrayList<>();
         FurlingControl control = WindAssessment.control(req);
         for (double v : req.windSpeedsMs()) {
