@@ -39,7 +39,8 @@ final class LimitAudit {
         double cutInWind = 0;
         boolean charges;
         if (req.drive() instanceof WindDrive w) {
-            WindMatchResult r = WindMatching.match(w.matchRequest(spec, load));
+            // the search's full model matches without the running drag for now (WindDriveModel): audit that model
+            WindMatchResult r = WindMatching.matchWithoutDrag(alt, w.matchRequest(spec, load));
             voc = r.openCircuitLineRmsVAtCheckSpeed();
             rated = AlternatorEvaluator.point(alt, load, r.points().get(w.ratedRow()).alternatorSpeedRpm());
             cutInWind = r.cutInWindSpeedMs().orElse(Double.POSITIVE_INFINITY);
