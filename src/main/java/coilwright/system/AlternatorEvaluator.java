@@ -95,7 +95,7 @@ public final class AlternatorEvaluator {
         double ePh = alt.emfPhaseRmsV(speedRpm);
         double eLine = alt.emfLineRmsV(speedRpm);
         if (speedRpm <= 0) {
-            return new SpeedPoint(0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, ConductionMode.ZERO_BELOW_CUT_IN);
+            return SpeedPoint.standstill();
         }
         AcSource src = new AcSource(alt.spec().winding().phases(), alt.spec().connection(), ePh, f,
                 alt.phaseResistanceHotOhm(), alt.phaseInductanceH());
@@ -129,7 +129,7 @@ public final class AlternatorEvaluator {
         double ePh = alt.emfPhaseRmsV(speedRpm);
         double eLine = alt.emfLineRmsV(speedRpm);
         if (speedRpm <= 0) {
-            return new SpeedPoint(0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, ConductionMode.ZERO_BELOW_CUT_IN);
+            return SpeedPoint.standstill();
         }
         return speedPoint(alt, speedRpm, f, ePh, eLine, atSpeed(speedRpm, () -> sweep.solveAt(ePh, f)));
     }
