@@ -81,8 +81,7 @@ public final class AlternatorEvaluator {
         SafetyInputs safety = safetyInputs(alt, load, vocMax, maxSpeed, req.maxSpeedRpm() > 0
                         ? "the maximum speed given" : "twice the rated speed, as no maximum was given",
                 Math.max(maxOutput, rated.powerToLoadW()), Math.max(maxDc, rated.dcCurrentA()));
-        HeatAndLosses heat = HeatAssessment.assess(alt, load, points.stream().map(SpeedPoint::speedRpm).toList(),
-                req.effectiveRatedSpeedRpm(), maxSpeed);
+        HeatAndLosses heat = HeatAssessment.assess(alt, load, points, rated, maxSpeed);
         List<coilwright.safety.Caution> cautions = new ArrayList<>(Cautions.assess(safety));
         cautions.addAll(HeatAssessment.cautions(alt, heat));
         cautions.sort(java.util.Comparator.comparing(coilwright.safety.Caution::severity));
@@ -96,7 +95,7 @@ public final class AlternatorEvaluator {
         double ePh = alt.emfPhaseRmsV(speedRpm);
         double eLine = alt.emfLineRmsV(speedRpm);
         if (speedRpm <= 0) {
-            return new SpeedPoint(0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, ConductionMode.ZERO_BELOW_CUT_IN);
+            return SpeedPoint.standstill();
         }
         AcSource src = new AcSource(alt.spec().winding().phases(), alt.spec().connection(), ePh, f,
                 alt.phaseResistanceHotOhm(), alt.phaseInductanceH());
@@ -130,7 +129,7 @@ public final class AlternatorEvaluator {
         double ePh = alt.emfPhaseRmsV(speedRpm);
         double eLine = alt.emfLineRmsV(speedRpm);
         if (speedRpm <= 0) {
-            return new SpeedPoint(0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, ConductionMode.ZERO_BELOW_CUT_IN);
+            return SpeedPoint.standstill();
         }
         return speedPoint(alt, speedRpm, f, ePh, eLine, atSpeed(speedRpm, () -> sweep.solveAt(ePh, f)));
     }

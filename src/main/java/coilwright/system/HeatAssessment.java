@@ -44,16 +44,17 @@ public final class HeatAssessment {
     /**
      * @param alt         the built machine
      * @param load        its load
-     * @param speedsRpm   the evaluated speeds, ascending
-     * @param ratedRpm    the rated speed, rpm
+     * @param curve       the evaluated curve of this machine and load, ascending in speed (its points, solved with the
+     *                    copper at the temperature entered, start each fixed point)
+     * @param rated       the curve's point at the rated speed
      * @param maxSpeedRpm the highest speed the machine can reach (short-circuit check), rpm
      * @throws coilwright.validation.SolverFailedException when a winding temperature does not converge
      */
-    public static HeatAndLosses assess(Alternator alt, Load load, List<Double> speedsRpm, double ratedRpm,
+    public static HeatAndLosses assess(Alternator alt, Load load, List<SpeedPoint> curve, SpeedPoint rated,
                                        double maxSpeedRpm) {
         MachineLosses model = new MachineLosses(alt, load, alt.spec().ambientTempC());
         double top = MachineLosses.maxSpeedRpm(alt);
-        List<Double> inRange = speedsRpm.stream().filter(s -> s <= top).toList();
+        List<SpeedPoint> inRange = curve.stream().filter(p -> p.speedRpm() <= top).toList();
         List<LossPoint> points = new ArrayList<>();
         int n = inRange.size();
         int stride = Math.max(1, (int) Math.ceil((n - 1) / (double) (MAX_POINTS - 1)));
@@ -63,25 +64,26 @@ public final class HeatAssessment {
         if (n > 0 && (n - 1) % stride != 0) {
             points.add(model.steadyAt(inRange.get(n - 1)));
         }
-        LossPoint rated = model.steadyAt(Math.min(ratedRpm, top));
+        double ratedRpm = rated.speedRpm();
+        LossPoint ratedLosses = ratedRpm <= top ? model.steadyAt(rated) : model.steadyAt(top);
         LossPoint hottest = points.stream().max(Comparator.comparingDouble(LossPoint::windingHotSpotC))
-                .filter(p -> p.windingHotSpotC() > rated.windingHotSpotC()).orElse(rated);
+                .filter(p -> p.windingHotSpotC() > ratedLosses.windingHotSpotC()).orElse(ratedLosses);
         ThermalClass insulation = alt.spec().insulationClass();
         double limit = insulation.limitC();
         double crossing = crossing(model, points, limit);
         CoggingTorque cogging = cogging(alt);
-        double magnetC = Math.min(MAX_MAGNET_CHECK_C, Math.max(alt.spec().magnetTempC(), rated.magnetC()));
+        double magnetC = Math.min(MAX_MAGNET_CHECK_C, Math.max(alt.spec().magnetTempC(), ratedLosses.magnetC()));
         String basis = String.format(Locale.ROOT, "The operating curve uses the winding temperature entered (%.0f C). "
                         + "The loss table solves it instead: at each speed the copper resistance follows the "
                         + "temperature its own losses heat it to, in still air at %.0f C.",
                 alt.spec().windingTempC(), model.ambientC())
-                + (n < speedsRpm.size() || ratedRpm > top ? String.format(Locale.ROOT, " Speeds above %.0f rpm are "
+                + (n < curve.size() || ratedRpm > top ? String.format(Locale.ROOT, " Speeds above %.0f rpm are "
                 + "beyond the thermal and iron-loss models and are left out (the rated figures are at %.0f rpm).", top,
                 Math.min(ratedRpm, top)) : "");
-        return new HeatAndLosses(basis, model.ambientC(), model.assumptions(), points, rated, hottest, limit,
+        return new HeatAndLosses(basis, model.ambientC(), model.assumptions(), points, ratedLosses, hottest, limit,
                 crossing > 0, crossing, model.friction(), cogging,
                 cogging.peakNm() + model.friction().breakawayTorqueNm(),
-                demagnetisation(alt, maxSpeedRpm, magnetC, rated.windingMeanC()));
+                demagnetisation(alt, maxSpeedRpm, magnetC, ratedLosses.windingMeanC()));
     }
 
     /** Cogging at the magnet temperature entered; none for an air-cored stator. */
@@ -109,8 +111,13 @@ public final class HeatAssessment {
                 if (i == 0) {
                     return points.get(0).speedRpm();
                 }
-                // the table brackets the crossing: Brent's method inside that one interval
-                UnivariateFunction excess = speed -> model.steadyAt(speed).windingHotSpotC() - limitC;
+                // the table brackets the crossing: Brent's method inside that one interval, each fixed point started
+                // from the winding temperature interpolated between the table's
+                LossPoint a = points.get(i - 1);
+                LossPoint b = points.get(i);
+                UnivariateFunction excess = speed -> model.steadyAt(speed, a.windingMeanC() + (speed - a.speedRpm())
+                        / (b.speedRpm() - a.speedRpm()) * (b.windingMeanC() - a.windingMeanC())).windingHotSpotC()
+                        - limitC;
                 return new BrentSolver(CROSSING_ACCURACY_RPM).solve(CROSSING_MAX_EVALUATIONS, excess,
                         points.get(i - 1).speedRpm(), points.get(i).speedRpm());
             }

@@ -31,6 +31,12 @@ public record HydroOperatingPoint(double flowM3s, double netHeadM, double runner
         flags = List.copyOf(flags);
     }
 
+    /** Where the alternator's power goes (its shaft power is the electromagnetic power). */
+    public PowerFlow powerFlow() {
+        return new PowerFlow(alternatorShaftPowerW, powerToBatteryW, windingCopperLossW, cableLossW, diodeLossW,
+                batteryInternalLossW);
+    }
+
     /** Every loss between the runner shaft and the battery, W. */
     public double totalLossW() {
         return drivetrainLossW + windingCopperLossW + cableLossW + batteryInternalLossW + diodeLossW;

@@ -30,6 +30,24 @@ public record LossPoint(double speedRpm, double windingMeanC, double windingHotS
                         double bearingFrictionLossW, double windageLossW, double diodeLossW, double cableLossW,
                         double batteryInternalLossW, double shaftPowerW, double shaftTorqueNm, double efficiency) {
 
+    /**
+     * Standing still: no loss, no power, everything at ambient.
+     *
+     * @param ambientC ambient air temperature, C
+     */
+    public static LossPoint standstill(double ambientC) {
+        return new LossPoint(0, ambientC, ambientC, ambientC, true, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0);
+    }
+
+    /**
+     * Where the electromagnetic power goes: the shaft power less the losses before the winding's EMF (conductor
+     * eddy, delta circulation, iron, bearings, windage).
+     */
+    public PowerFlow powerFlow() {
+        return new PowerFlow(powerToLoadW + windingCopperLossW + cableLossW + diodeLossW + batteryInternalLossW,
+                powerToLoadW, windingCopperLossW, cableLossW, diodeLossW, batteryInternalLossW);
+    }
+
     /** Every loss between the shaft and the load, W. */
     public double totalLossW() {
         return windingCopperLossW + conductorEddyLossW + deltaCirculationLossW + statorIronLossW

@@ -4,7 +4,6 @@ import coilwright.conductor.Copper;
 import coilwright.conductor.Cooling;
 import coilwright.load.Load;
 import coilwright.load.LoadSolver;
-import coilwright.load.OperatingPoint;
 import coilwright.losses.Bearing;
 import coilwright.losses.BearingType;
 import coilwright.losses.ConductorEddyLoss;
@@ -53,6 +52,8 @@ public final class MachineLosses {
     /** Yoke flux density the stator back iron is assumed sized for when its depth is not given, T (common practice). */
     static final double ASSUMED_YOKE_FLUX_DENSITY_T = 1.4;
     private static final double EDDY_REFERENCE_C = 20.0;
+    /** Speed the conductor eddy loss is integrated at before scaling with the speed squared, rpm (any would do). */
+    private static final double EDDY_SCALING_RPM = 1000;
     /** Highest speed of {@link CoolingConditions}, rpm. */
     private static final double MAX_THERMAL_RPM = 20_000;
 
@@ -66,6 +67,14 @@ public final class MachineLosses {
     private final List<String> assumptions;
     /** The rectifier points of every speed and temperature, each warm-started from the last (so: one thread). */
     private final LoadSolver.Sweep sweep;
+    /** Zero-sequence inductance of the winding (geometry only, for the delta circulating current). */
+    private final ZeroSequenceInductance zeroSequence;
+    /**
+     * Conductor eddy loss of air-cored coils at {@link #EDDY_REFERENCE_C} over the speed squared, W/rpm^2 (0 for a
+     * slotted stator): the loss is the field's mean square over the coil layer, a property of the geometry alone,
+     * times omega^2 ({@link ConductorEddyLoss#airCored}), so it is integrated once here and scaled at each speed.
+     */
+    private final double eddyPerRpmSquaredW;
 
     /**
      * @param alt      the built machine
@@ -78,6 +87,16 @@ public final class MachineLosses {
         this.ambientC = ambientC;
         this.friction = assumedFriction();
         this.sweep = AlternatorEvaluator.sweep(alt, load);
+        this.zeroSequence = ZeroSequenceInductance.forWinding(alt.winding(),
+                alt.spec().rotor() instanceof AxialDualRotor);
+        if (alt.spec().rotor() instanceof AxialDualRotor r) {
+            this.eddyPerRpmSquaredW = ConductorEddyLoss.airCored(r, alt.spec().winding().poles(),
+                    alt.spec().magnetTempC(), alt.spec().winding().slots(), alt.spec().turnsPerCoil(),
+                    alt.spec().wire().strandsInHand(), alt.spec().wire().bareDiameterM(), EDDY_SCALING_RPM,
+                    EDDY_REFERENCE_C).totalW() / (EDDY_SCALING_RPM * EDDY_SCALING_RPM);
+        } else {
+            this.eddyPerRpmSquaredW = 0;
+        }
         String bearings = "bearings: two sealed deep-groove ball bearings, " + fmt(ASSUMED_BEARING_BORE_M * 1000)
                 + " mm bore, " + fmt(ASSUMED_BEARING_LOAD_N) + " N each, seal drag " + fmt(ASSUMED_SEAL_DRAG_NM)
                 + " N m each (assumed)";
@@ -153,13 +172,59 @@ public final class MachineLosses {
      * @throws coilwright.validation.SolverFailedException when the fixed point does not converge
      */
     public LossPoint steadyAt(double speedRpm) {
+        return steadyAt(speedRpm, alt.spec().windingTempC());
+    }
+
+    /**
+     * As {@link #steadyAt(double)}, the fixed point searched from a winding temperature near the answer (such as one
+     * interpolated between neighbouring speeds): the same answer to {@link WindingTemperature#ACCURACY_K}, fewer
+     * re-solves of the operating point.
+     *
+     * @param speedRpm shaft speed, rpm, &gt;= 0
+     * @param startC   winding temperature to start from, C
+     */
+    public LossPoint steadyAt(double speedRpm, double startC) {
         if (speedRpm <= 0) {
-            return new LossPoint(0, ambientC, ambientC, ambientC, true, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0);
+            return LossPoint.standstill(ambientC);
+        }
+        return solve(new Fixed(speedRpm), startC);
+    }
+
+    /**
+     * As {@link #steadyAt(double)} at the speed of a point of the evaluated curve, which was solved with the copper
+     * at the temperature entered: that point is the first of the fixed-point search, so the operating point is not
+     * solved there again.
+     *
+     * @param curvePoint a point of {@link AlternatorEvaluator}'s curve for this machine and load
+     */
+    public LossPoint steadyAt(SpeedPoint curvePoint) {
+        if (curvePoint.speedRpm() <= 0) {
+            return LossPoint.standstill(ambientC);
+        }
+        Fixed fixed = new Fixed(curvePoint.speedRpm());
+        double enteredC = alt.resistance().workingTemperatureC();
+        if (alt.resistance().resistanceOhmAt(enteredC) == alt.phaseResistanceHotOhm()) {
+            fixed.remember(enteredC, PowerFlow.of(curvePoint));
+        }
+        return solve(fixed, enteredC);
+    }
+
+    /**
+     * The steady state at a speed by the bracketing solve from ambient alone ({@link WindingTemperature#solve}), the
+     * reference the faster search of {@link #steadyAt} is checked against.
+     */
+    LossPoint bracketedAt(double speedRpm) {
+        if (speedRpm <= 0) {
+            return LossPoint.standstill(ambientC);
         }
         Fixed fixed = new Fixed(speedRpm);
         CoolingConditions cc = new CoolingConditions(speedRpm, ambientC, 0);
-        CoupledTemperature t = WindingTemperature.solve(thermal, cc, fixed::heatAt);
-        return fixed.point(t);
+        return fixed.point(WindingTemperature.solve(thermal, cc, fixed::heatAt));
+    }
+
+    private LossPoint solve(Fixed fixed, double startC) {
+        CoolingConditions cc = new CoolingConditions(fixed.speedRpm, ambientC, 0);
+        return fixed.point(WindingTemperature.solveNear(thermal, cc, fixed::heatAt, startC));
     }
 
     /**
@@ -185,6 +250,9 @@ public final class MachineLosses {
         private final double bearingW;
         private final double windageW;
         private final double eddyAtReferenceW;
+        /** The operating point last solved (or given) and its winding temperature: the fixed point ends on it. */
+        private double flowC = Double.NaN;
+        private PowerFlow flow;
 
         Fixed(double speedRpm) {
             this.speedRpm = speedRpm;
@@ -197,10 +265,7 @@ public final class MachineLosses {
             if (alt.spec().rotor() instanceof AxialDualRotor r) {
                 this.windageW = omega * Windage.axialDualRotorTorqueNm(r, r.outerRadiusM()
                         + DiscStatorThermal.DEFAULT_DISC_OVERHANG_M, speedRpm, rho, nu);
-                int coils = alt.spec().winding().slots();
-                this.eddyAtReferenceW = ConductorEddyLoss.airCored(r, poles, alt.spec().magnetTempC(), coils,
-                        alt.spec().turnsPerCoil(), alt.spec().wire().strandsInHand(), alt.spec().wire().bareDiameterM(),
-                        speedRpm, EDDY_REFERENCE_C).totalW();
+                this.eddyAtReferenceW = eddyPerRpmSquaredW * speedRpm * speedRpm;
             } else {
                 this.windageW = omega * Windage.radialRotorTorqueNm((RadialSurfaceRotor) alt.spec().rotor(), speedRpm,
                         rho, nu);
@@ -208,9 +273,18 @@ public final class MachineLosses {
             }
         }
 
-        OperatingPoint operatingPoint(double windingC) {
-            return sweep.solveAt(alt.emfPhaseRmsV(speedRpm), alt.frequencyHz(speedRpm),
-                    resistanceOhm(windingC) / alt.phaseResistanceHotOhm());
+        void remember(double windingC, PowerFlow f) {
+            flowC = windingC;
+            flow = f;
+        }
+
+        /** The rectifier's power flow with the copper at a temperature; the last one is kept. */
+        PowerFlow flowAt(double windingC) {
+            if (windingC != flowC) {
+                remember(windingC, PowerFlow.of(sweep.solveAt(alt.emfPhaseRmsV(speedRpm), alt.frequencyHz(speedRpm),
+                        resistanceOhm(windingC) / alt.phaseResistanceHotOhm())));
+            }
+            return flow;
         }
 
         double resistanceOhm(double windingC) {
@@ -223,28 +297,26 @@ public final class MachineLosses {
         }
 
         double deltaW(double windingC) {
-            boolean airCored = alt.spec().rotor() instanceof AxialDualRotor;
             return DeltaCirculation.at(alt.spec().connection(), alt.emfPhaseRmsV(speedRpm),
                     Math.min(1, alt.thirdHarmonicEmfRatio()), resistanceOhm(windingC), alt.phaseInductanceH(),
-                    ZeroSequenceInductance.forWinding(alt.winding(), airCored), alt.spec().winding().poles(),
-                    speedRpm).copperLossW();
+                    zeroSequence, alt.spec().winding().poles(), speedRpm).copperLossW();
         }
 
         HeatSources heatAt(double windingC) {
-            OperatingPoint op = operatingPoint(windingC);
-            return new HeatSources(op.windingCopperLossW() + eddyW(windingC) + deltaW(windingC), ironW, 0, bearingW);
+            return new HeatSources(flowAt(windingC).windingCopperLossW() + eddyW(windingC) + deltaW(windingC), ironW,
+                    0, bearingW);
         }
 
         LossPoint point(CoupledTemperature t) {
             double c = t.windingMeanC();
-            OperatingPoint op = operatingPoint(c);
+            PowerFlow op = flowAt(c);
             double eddy = eddyW(c);
             double delta = deltaW(c);
             double shaft = op.powerFromEmfW() + eddy + delta + ironW + bearingW + windageW;
             double omega = speedRpm * Math.PI / 30;
             return new LossPoint(speedRpm, c, t.solution().windingHotSpotC(), t.solution().magnetC(), t.settled(),
                     op.powerToLoadW(), op.windingCopperLossW(), eddy, delta, ironW, bearingW, windageW,
-                    op.diodeLossW(), op.acCableLossW() + op.dcCableLossW(), op.batteryInternalLossW(), shaft,
+                    op.diodeLossW(), op.cableLossW(), op.batteryInternalLossW(), shaft,
                     shaft / omega, shaft > 0 ? op.powerToLoadW() / shaft : 0);
         }
     }

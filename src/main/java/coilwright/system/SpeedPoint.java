@@ -47,6 +47,16 @@ public record SpeedPoint(
         double currentDensityAPerMm2,
         ConductionMode mode) {
 
+    /** Standing still, or any point with no EMF: nothing flows. */
+    public static SpeedPoint standstill() {
+        return new SpeedPoint(0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, ConductionMode.ZERO_BELOW_CUT_IN);
+    }
+
+    /** Where the power goes (shaft power is the electromagnetic power here). */
+    public PowerFlow powerFlow() {
+        return PowerFlow.of(this);
+    }
+
     /** Every loss between the shaft and the load, W. */
     public double totalLossW() {
         return windingCopperLossW + cableLossW + batteryInternalLossW + diodeLossW;

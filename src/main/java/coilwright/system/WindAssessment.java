@@ -105,11 +105,14 @@ public final class WindAssessment {
      * The steady winding temperature and every loss at the matched point of greatest battery power (the top of the
      * matched curve), in still air at the ambient temperature entered.
      */
-    static LossPoint peakHeat(Alternator alt, coilwright.load.Load load, java.util.List<WindMatchPoint> points) {
+    static LossPoint peakHeat(AlternatorCurve curve, java.util.List<WindMatchPoint> points) {
+        Alternator alt = curve.alternator();
         double altRpm = points.stream().max(java.util.Comparator.comparingDouble(WindMatchPoint::powerToBatteryW))
                 .map(WindMatchPoint::alternatorSpeedRpm).orElse(0.0);
-        return new MachineLosses(alt, load, alt.spec().ambientTempC())
-                .steadyAt(Math.min(altRpm, MachineLosses.maxSpeedRpm(alt)));
+        MachineLosses losses = new MachineLosses(alt, curve.load(), alt.spec().ambientTempC());
+        double top = MachineLosses.maxSpeedRpm(alt);
+        // the matched point is on the curve already: the fixed point starts from it
+        return altRpm <= top ? losses.steadyAt(curve.at(altRpm)) : losses.steadyAt(top);
     }
 
     /** A caution when the winding at the top of the matched curve is above or near its insulation class. */

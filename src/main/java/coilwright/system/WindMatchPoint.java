@@ -41,6 +41,17 @@ public record WindMatchPoint(double windSpeedMs, double rotorSpeedRpm, double al
         flags = List.copyOf(flags);
     }
 
+    /** No wind: nothing turns, nothing flows. */
+    public static WindMatchPoint calm() {
+        return new WindMatchPoint(0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, List.of(), 0);
+    }
+
+    /** Where the alternator's power goes (its shaft power is the electromagnetic power). */
+    public PowerFlow powerFlow() {
+        return new PowerFlow(alternatorShaftPowerW, powerToBatteryW, windingCopperLossW, cableLossW, diodeLossW,
+                batteryInternalLossW);
+    }
+
     /** Every loss between the rotor shaft and the battery, W. */
     public double totalLossW() {
         return drivetrainLossW + windingCopperLossW + cableLossW + batteryInternalLossW + diodeLossW

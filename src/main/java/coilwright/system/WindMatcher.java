@@ -71,7 +71,7 @@ public final class WindMatcher {
     public WindMatchPoint at(double windSpeedMs) {
         new Checks().range("windSpeedMs", windSpeedMs, 0.0, 100.0).throwIfAny();
         if (windSpeedMs == 0.0) {
-            return new WindMatchPoint(0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, List.of(), 0);
+            return WindMatchPoint.calm();
         }
         double v = windSpeedMs;
         double efficiency = rotor.drivetrainEfficiency();

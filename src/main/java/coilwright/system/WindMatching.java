@@ -96,7 +96,7 @@ public final class WindMatching {
                 maxBatteryW, maxDcA));
         WindStart starting = WindAssessment.starting(alt, rotor, rho, cutIn, distribution);
         WindAssessment.startingCaution(starting).ifPresent(cautions::add);
-        LossPoint peakHeat = WindAssessment.peakHeat(alt, req.load(), points);
+        LossPoint peakHeat = WindAssessment.peakHeat(curve, points);
         WindAssessment.peakHeatCaution(alt, peakHeat).ifPresent(cautions::add);
         cautions.sort(java.util.Comparator.comparing(Caution::severity));
         EnergyAssumptions assumed = WindAssessment.energyAssumptions(req);

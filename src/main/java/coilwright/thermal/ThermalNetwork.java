@@ -1,11 +1,5 @@
 package coilwright.thermal;
 
-import org.apache.commons.math3.linear.Array2DRowRealMatrix;
-import org.apache.commons.math3.linear.ArrayRealVector;
-import org.apache.commons.math3.linear.LUDecomposition;
-import org.apache.commons.math3.linear.RealMatrix;
-import org.apache.commons.math3.linear.RealVector;
-
 import java.util.ArrayList;
 import java.util.List;
 
@@ -16,6 +10,8 @@ import java.util.List;
  * path to ambient from every node the matrix is an M-matrix, so each temperature rise grows with every heat input.
  */
 public final class ThermalNetwork {
+    /** A pivot below this conductance, W/K, makes the network singular (as Commons Math's LU threshold did). */
+    private static final double SINGULAR_PIVOT = 1e-14;
     private final List<String> names = new ArrayList<>();
     private final List<double[]> links = new ArrayList<>(); // {i, j, G}; j = -1 means ambient
 
@@ -57,27 +53,72 @@ public final class ThermalNetwork {
         if (heatW.length != n) {
             throw new IllegalArgumentException("heatW has " + heatW.length + " entries for " + n + " nodes");
         }
-        RealMatrix g = new Array2DRowRealMatrix(n, n);
+        double[][] g = new double[n][n];
         for (double[] l : links) {
             int a = (int) l[0];
             int b = (int) l[1];
-            g.addToEntry(a, a, l[2]);
+            g[a][a] += l[2];
             if (b >= 0) {
-                g.addToEntry(b, b, l[2]);
-                g.addToEntry(a, b, -l[2]);
-                g.addToEntry(b, a, -l[2]);
+                g[b][b] += l[2];
+                g[a][b] -= l[2];
+                g[b][a] -= l[2];
             }
         }
-        LUDecomposition lu = new LUDecomposition(g, 1e-14);
-        if (!lu.getSolver().isNonSingular()) {
+        double[] rise = heatW.clone();
+        if (!eliminate(g, rise)) {
             throw new IllegalStateException("thermal network " + names + " has a node with no path to ambient");
         }
-        RealVector rise = lu.getSolver().solve(new ArrayRealVector(heatW));
         double[] t = new double[n];
         for (int i = 0; i < n; i++) {
-            t[i] = ambientC + rise.getEntry(i);
+            t[i] = ambientC + rise[i];
         }
         return t;
+    }
+
+    /**
+     * Solves g x = b in place (b becomes x) by Gaussian elimination with partial pivoting, the LU decomposition
+     * written out for the handful of nodes of these networks.
+     *
+     * @return false when a pivot falls below {@link #SINGULAR_PIVOT} (some node has no path to ambient)
+     */
+    private static boolean eliminate(double[][] g, double[] b) {
+        int n = b.length;
+        for (int col = 0; col < n; col++) {
+            int pivot = col;
+            for (int row = col + 1; row < n; row++) {
+                if (Math.abs(g[row][col]) > Math.abs(g[pivot][col])) {
+                    pivot = row;
+                }
+            }
+            if (!(Math.abs(g[pivot][col]) >= SINGULAR_PIVOT)) {
+                return false;
+            }
+            if (pivot != col) {
+                double[] row = g[pivot];
+                g[pivot] = g[col];
+                g[col] = row;
+                double v = b[pivot];
+                b[pivot] = b[col];
+                b[col] = v;
+            }
+            for (int row = col + 1; row < n; row++) {
+                double factor = g[row][col] / g[col][col];
+                if (factor != 0) {
+                    for (int k = col; k < n; k++) {
+                        g[row][k] -= factor * g[col][k];
+                    }
+                    b[row] -= factor * b[col];
+                }
+            }
+        }
+        for (int row = n - 1; row >= 0; row--) {
+            double sum = b[row];
+            for (int k = row + 1; k < n; k++) {
+                sum -= g[row][k] * b[k];
+            }
+            b[row] = sum / g[row][row];
+        }
+        return true;
     }
 
     /** Heat leaving to ambient for a solution, W (equals the total heat input at steady state). */

@@ -23,6 +23,13 @@ public final class WindingTemperature {
     /** Absolute accuracy of the fixed point, K. */
     public static final double ACCURACY_K = 0.01;
     private static final int MAX_EVALUATIONS = 100;
+    /**
+     * A secant step from a point of {@link #solveNear} at most this long accepts the point, K: a tenth of
+     * {@link #ACCURACY_K}, so the answer lies within the bracketing solve's own accuracy of the fixed point.
+     */
+    static final double SECANT_STEP_K = ACCURACY_K / 10;
+    /** Loss evaluations {@link #solveNear} tries before it falls back to the bracketing solve. */
+    static final int MAX_SECANT_EVALUATIONS = 8;
 
     private WindingTemperature() {
     }
@@ -71,6 +78,56 @@ public final class WindingTemperature {
             throw new SolverFailedException("windingTempC", "the winding temperature did not converge between "
                     + Checks.fmt(low) + " and " + Checks.fmt(high) + " C", e);
         }
+    }
+
+    /**
+     * The same fixed point as {@link #solve}, to its accuracy, found from a winding temperature near the answer by the
+     * secant method on the residual r(T) = T_network(losses(T)) - T: the first step is the plain substitution
+     * T_1 = T_network(losses(T_0)), the later ones the secant through the last two points (super-linear; the residual
+     * is smooth and nearly linear, since the losses change with the copper resistance only). Each loss evaluation is
+     * one re-solve of the operating point, which dominates the cost, so this takes two or three instead of the eight
+     * or more of the bracketing solve. A point is accepted when the secant step from it is at most
+     * {@link #SECANT_STEP_K} and the residual falls through zero there (a stable fixed point, as a machine warming
+     * up settles at). Anything else (a residual that does not fall, a step leaving ambient to
+     * {@link #MAX_WINDING_C}, no convergence within {@link #MAX_SECANT_EVALUATIONS}) falls back to {@link #solve},
+     * which brackets from ambient and also reports thermal runaway.
+     *
+     * @param startC      a winding temperature near the answer, C (clamped to ambient .. {@link #MAX_WINDING_C})
+     */
+    public static CoupledTemperature solveNear(ThermalModel model, CoolingConditions conditions,
+                                               DoubleFunction<HeatSources> heatAtWindingC, double startC) {
+        new Checks().present("model", model).present("conditions", conditions).present("heatAtWindingC", heatAtWindingC)
+                .range("startC", startC, -1e6, 1e6).throwIfAny();
+        double ambient = conditions.ambientC();
+        double t0 = Math.max(ambient, Math.min(MAX_WINDING_C, startC));
+        HeatSources h0 = heatAtWindingC.apply(t0);
+        ThermalSolution s0 = model.solve(conditions, h0);
+        double r0 = s0.windingMeanC() - t0;
+        int calls = 1;
+        if (r0 == 0) {
+            return new CoupledTemperature(t0, s0, h0, true, calls);
+        }
+        double t1 = t0 + r0;
+        while (calls < MAX_SECANT_EVALUATIONS && t1 >= ambient && t1 <= MAX_WINDING_C) {
+            HeatSources h1 = heatAtWindingC.apply(t1);
+            ThermalSolution s1 = model.solve(conditions, h1);
+            calls++;
+            double r1 = s1.windingMeanC() - t1;
+            double slope = (r1 - r0) / (t1 - t0);
+            if (!(slope < 0) || !Double.isFinite(slope)) {
+                break;
+            }
+            double step = -r1 / slope;
+            if (Math.abs(step) <= SECANT_STEP_K) {
+                return new CoupledTemperature(t1, s1, h1, true, calls);
+            }
+            t0 = t1;
+            r0 = r1;
+            t1 += step;
+        }
+        CoupledTemperature full = solve(model, conditions, heatAtWindingC);
+        return new CoupledTemperature(full.windingMeanC(), full.solution(), full.heat(), full.settled(),
+                full.evaluations() + calls);
     }
 
     private static CoupledTemperature at(ThermalModel model, CoolingConditions cc, DoubleFunction<HeatSources> heat,

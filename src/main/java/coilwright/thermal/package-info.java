@@ -25,6 +25,9 @@
  * the losses of the operating point evaluated with the copper at T (resistance by IEC 60028) heat the winding to T
  * (Brent's method on r(T) = T_network(losses(T)) - T, bracketed upwards from ambient, so the lowest, physically
  * reached fixed point is found; runaway beyond 250 C is reported, not hidden).
+ * {@link coilwright.thermal.WindingTemperature#solveNear} finds the same fixed point to the same accuracy from a
+ * temperature near it by the secant method (two or three loss evaluations, each a re-solve of the operating point),
+ * and falls back to the bracketing solve whenever the secant does not settle on a stable crossing.
  * {@link coilwright.thermal.InsulationLimit#firstCrossing} finds where along an operating curve the hot spot reaches
  * the IEC 60085 class limit. Ambient defaults to 25 C ({@link coilwright.thermal.CoolingConditions}).
  *

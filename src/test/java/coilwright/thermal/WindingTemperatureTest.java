@@ -55,4 +55,30 @@ class WindingTemperatureTest {
         assertThrows(coilwright.validation.InvalidInputException.class,
                 () -> InsulationLimit.firstCrossing(n -> n, 10, 5, 155));
     }
+
+    @Test
+    void the_secant_search_finds_the_bracketed_fixed_point_from_any_start_with_fewer_evaluations() {
+        java.util.function.DoubleFunction<HeatSources> copper = t -> HeatSources.winding(180 * Copper.resistanceRatio(t));
+        CoupledTemperature reference = WindingTemperature.solve(model, at250, copper);
+        for (double start : new double[]{-40, 25, 60, reference.windingMeanC(), 150, WindingTemperature.MAX_WINDING_C}) {
+            CoupledTemperature c = WindingTemperature.solveNear(model, at250, copper, start);
+            assertTrue(c.settled());
+            // each within ACCURACY_K of the fixed point (the secant to a tenth of it)
+            assertEquals(reference.windingMeanC(), c.windingMeanC(), 1.1 * WindingTemperature.ACCURACY_K, "from " + start);
+            assertEquals(180 * Copper.resistanceRatio(c.windingMeanC()), c.heat().windingW(), 1e-9);
+            assertEquals(model.solve(at250, c.heat()).windingMeanC(), c.solution().windingMeanC(), 1e-12);
+            assertTrue(c.evaluations() < reference.evaluations(), c.evaluations() + " vs " + reference.evaluations());
+        }
+    }
+
+    @Test
+    void the_secant_search_falls_back_to_the_bracketing_solve_for_no_loss_and_for_runaway() {
+        CoupledTemperature none = WindingTemperature.solveNear(model, new CoolingConditions(0, 12, 0),
+                t -> HeatSources.winding(0), 80);
+        assertEquals(12, none.windingMeanC(), WindingTemperature.ACCURACY_K);
+        assertTrue(none.settled());
+        CoupledTemperature runaway = WindingTemperature.solveNear(model, at250, t -> HeatSources.winding(3000), 80);
+        assertFalse(runaway.settled());
+        assertEquals(WindingTemperature.MAX_WINDING_C, runaway.windingMeanC());
+    }
 }
