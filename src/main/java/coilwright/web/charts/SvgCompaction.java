@@ -34,7 +34,7 @@ final class SvgCompaction {
     }
 
     /** The compact form of one chart drawn by JFreeSVG (after its styles became presentation attributes). */
-    static String compact(String svg, String id, int widthPx, int heightPx) {
+    static String compact(String svg, String id, int widthPx, int heightPx, double tolerancePx) {
         String s = svg.replace(" fill-opacity=\"1.0\"", "").replace(" stroke-opacity=\"1.0\"", "")
                 .replace(" xmlns:jfreesvg='http://www.jfree.org/jfreesvg/svg'", "");
         if (!s.contains("xlink:")) {
@@ -51,23 +51,23 @@ final class SvgCompaction {
         }
         s = replaceAll(RGB, s, m -> String.format(Locale.ROOT, "#%02x%02x%02x", Integer.parseInt(m.group(1)),
                 Integer.parseInt(m.group(2)), Integer.parseInt(m.group(3))));
-        s = replaceAll(PATH_D, s, m -> "d='" + simplifiedPath(m.group(1)) + "'");
+        s = replaceAll(PATH_D, s, m -> "d='" + simplifiedPath(m.group(1), tolerancePx) + "'");
         return groupRuns(s);
     }
 
     /**
      * A path of straight segments with the points a reader cannot see dropped: Douglas-Peucker (Douglas and
-     * Peucker, Canadian Cartographer 10(2), 1973) within {@link #TOLERANCE_PX}, run separately on each side of the
+     * Peucker, Canadian Cartographer 10(2), 1973) within {@code tolerancePx}, run separately on each side of the
      * highest and lowest point so those always stay. Coordinates are px of the drawing.
      */
-    static String simplifiedPath(String d) {
+    static String simplifiedPath(String d, double tolerancePx) {
         Matcher m = POINT.matcher(d);
         StringBuilder out = new StringBuilder();
         List<double[]> run = new ArrayList<>();
         int end = 0;
         while (m.find()) {
             if (m.group(1).equals("M") && !run.isEmpty()) {
-                append(out, run);
+                append(out, run, tolerancePx);
                 run.clear();
             }
             run.add(new double[] {Double.parseDouble(m.group(2)), Double.parseDouble(m.group(3))});
@@ -76,12 +76,12 @@ final class SvgCompaction {
         if (run.isEmpty()) {
             return d;
         }
-        append(out, run);
+        append(out, run, tolerancePx);
         return out + d.substring(end).strip();
     }
 
-    private static void append(StringBuilder out, List<double[]> points) {
-        boolean[] keep = visible(points);
+    private static void append(StringBuilder out, List<double[]> points, double tolerancePx) {
+        boolean[] keep = visible(points, tolerancePx);
         String command = "M";
         for (int i = 0; i < points.size(); i++) {
             if (keep[i]) {
@@ -92,7 +92,7 @@ final class SvgCompaction {
     }
 
     /** Which points to keep: the ends, the highest and lowest, and every one farther than the tolerance. */
-    static boolean[] visible(List<double[]> points) {
+    static boolean[] visible(List<double[]> points, double tolerancePx) {
         int n = points.size();
         boolean[] keep = new boolean[n];
         int low = 0;
@@ -106,13 +106,13 @@ final class SvgCompaction {
         for (int a = 0; a < anchors.length; a++) {
             keep[anchors[a]] = true;
             if (a > 0) {
-                douglasPeucker(points, anchors[a - 1], anchors[a], keep);
+                douglasPeucker(points, anchors[a - 1], anchors[a], keep, tolerancePx);
             }
         }
         return keep;
     }
 
-    private static void douglasPeucker(List<double[]> p, int first, int last, boolean[] keep) {
+    private static void douglasPeucker(List<double[]> p, int first, int last, boolean[] keep, double tolerancePx) {
         java.util.ArrayDeque<int[]> spans = new java.util.ArrayDeque<>();
         spans.push(new int[] {first, last});
         while (!spans.isEmpty()) {
@@ -123,7 +123,7 @@ final class SvgCompaction {
             double dy = b[1] - a[1];
             double length = Math.hypot(dx, dy);
             int farthest = -1;
-            double worst = TOLERANCE_PX;
+            double worst = tolerancePx;
             for (int i = span[0] + 1; i < span[1]; i++) {
                 double[] c = p.get(i);
                 double distance = length == 0 ? Math.hypot(c[0] - a[0], c[1] - a[1])

@@ -84,6 +84,38 @@ class SvgChartsTest {
                 new ChartSpec.Axis("y", "m"), List.of()));
     }
 
+    /** The vertices of the longest path drawn in the series' colour (the curve, not its legend swatch). */
+    private static List<double[]> curve(String svg, String colour) {
+        java.util.regex.Matcher m = java.util.regex.Pattern.compile("stroke=\"" + colour + "\"[^>]*><path d='([^']*)'")
+                .matcher(svg);
+        String longest = "";
+        while (m.find()) {
+            longest = m.group(1).length() > longest.length() ? m.group(1) : longest;
+        }
+        List<double[]> points = new java.util.ArrayList<>();
+        java.util.regex.Matcher p = java.util.regex.Pattern.compile("[ML](-?[0-9.]+),(-?[0-9.]+)").matcher(longest);
+        while (p.find()) {
+            points.add(new double[] {Double.parseDouble(p.group(1)), Double.parseDouble(p.group(2))});
+        }
+        return points;
+    }
+
+    @Test
+    void a_curve_of_a_thousand_points_is_drawn_with_few_and_keeps_its_peak_where_it_is() {
+        double[] x = IntStream.range(0, 1000).mapToDouble(i -> i * 0.6).toArray();
+        double[] y = IntStream.range(0, 1000).mapToDouble(i -> i == 613 ? 950 : 400 + 300 * Math.sin(i / 90.0)).toArray();
+        ChartSpec spec = ChartSpec.of("Spike", new ChartSpec.Axis("Speed", "rpm"), new ChartSpec.Axis("Power", "W"),
+                List.of(new Series("Power", x, y)));
+        List<double[]> every = curve(SvgCharts.lineChart(spec, -1.0), "#9a4311"); // a negative tolerance keeps every point
+        List<double[]> thin = curve(SvgCharts.lineChart(spec), "#9a4311");
+        assertEquals(1000, every.size(), "without thinning every point is drawn");
+        assertTrue(thin.size() < 150, "thinned to " + thin.size() + " points");
+        double peak = every.stream().mapToDouble(p -> p[1]).min().orElseThrow();
+        assertEquals(peak, thin.stream().mapToDouble(p -> p[1]).min().orElseThrow(), 1e-9, "the peak is drawn at its height");
+        assertTrue(thin.stream().anyMatch(p -> Math.abs(p[0] - every.get(613)[0]) < 1e-9 && p[1] == peak),
+                "and at its speed");
+    }
+
     @Test
     void renders_four_charts_fast_enough_for_one_results_page() {
         for (int i = 0; i < 10; i++) {

@@ -50,7 +50,7 @@ class SvgCompactionTest {
         double[] x = IntStream.range(0, n).mapToDouble(i -> 60 + 0.65 * i).toArray();
         double[] y = IntStream.range(0, n).mapToDouble(i -> 330 - 290 * Math.sin(Math.PI * i / (n - 1))
                 * Math.exp(-i / 600.0) - (i == 437 ? 40 : 0)).toArray();
-        String thin = SvgCompaction.simplifiedPath(path(x, y));
+        String thin = SvgCompaction.simplifiedPath(path(x, y), SvgCompaction.TOLERANCE_PX);
         List<double[]> kept = points(thin);
         assertTrue(kept.size() < 120, "kept " + kept.size() + " of " + n);
         for (int i = 0; i < n; i++) {
@@ -67,13 +67,14 @@ class SvgCompactionTest {
 
     @Test
     void a_highest_point_closer_to_the_chord_than_the_tolerance_is_still_kept() {
-        String thin = SvgCompaction.simplifiedPath("M0,100L50,99.9L100,100");
+        String thin = SvgCompaction.simplifiedPath("M0,100L50,99.9L100,100", SvgCompaction.TOLERANCE_PX);
         assertEquals("M0,100L50,99.9L100,100", thin);
     }
 
     @Test
     void several_sub_paths_are_thinned_separately() {
-        assertEquals("M0,0L10,0M0,5L10,5", SvgCompaction.simplifiedPath("M0,0L5,0L10,0M0,5L5,5L10,5"));
+        assertEquals("M0,0L10,0M0,5L10,5",
+                SvgCompaction.simplifiedPath("M0,0L5,0L10,0M0,5L5,5L10,5", SvgCompaction.TOLERANCE_PX));
     }
 
     @Test
@@ -85,7 +86,7 @@ class SvgCompactionTest {
         assertEquals("<svg><g stroke=\"#808080\"><line x1='0' y1='0' x2='1' y2='1'/><line x1='2' y1='0' x2='3' y2='1'/>"
                         + "</g><text x='1' y='2' fill=\"#000000\">a</text><rect x='0' y='0' width='5' height='5' "
                         + "fill=\"#ffffff\"/><text x='3' y='3'>b</text></svg>",
-                SvgCompaction.compact(svg, "c", 10, 10));
+                SvgCompaction.compact(svg, "c", 10, 10, SvgCompaction.TOLERANCE_PX));
     }
 
     @Test
