@@ -1,18 +1,27 @@
 #!/usr/bin/env bash
-# Loopback load test: start time of the jar, then wrk at 32 connections against /health and a POST route.
-#   scripts/loadtest.sh [ROUTE [BODY_FILE]]
-#   ROUTE      POST route to compare with /health (default: /health as GET, i.e. a self-check)
-#   BODY_FILE  JSON request body for ROUTE
+# Loopback load test: start time of the jar, then wrk at 32 connections against /health and one or more POST routes,
+# all against the same server in one run.
+#   scripts/loadtest.sh [ROUTE BODY_FILE [VARY_FIELD]] [ROUTE BODY_FILE [VARY_FIELD]] ...
+#   ROUTE       POST route to compare with /health (none: /health as GET twice, i.e. a self-check)
+#   BODY_FILE   JSON request body for ROUTE
+#   VARY_FIELD  optional, for this route: as VARY below (a route's third word is taken as its field when it does
+#               not start with /)
 # Env: DURATION (default 10s), WARMUP (3s), CONNECTIONS (32), THREADS (2), HEAP (256m),
 #      VARY (a numeric field of the body, e.g. maxRpm: changed on every request so the response cache never answers;
 #      without it a repeated body measures the cache), MAX_BUSY (the server's --max-busy, default its own).
+# Uncached evaluate, wind match and /health in one run:
+#   scripts/loadtest.sh /api/v1/evaluate scripts/evaluate-axial-200.json maxRpm \
+#                       /api/v1/match/wind scripts/match-wind-axial.json diameterM
 # Reports throughput, p50, p99, errors, non-2xx and 503 answers per run, and the server's RSS at start and end.
 # Only loopback: the server binds all interfaces but is only ever addressed at 127.0.0.1.
 set -euo pipefail
 cd "$(dirname "$0")/.."
 
-ROUTE="${1:-}"
-BODY="${2:-}"
+ROUTES=(); BODIES=(); VARIES=()
+while [ $# -gt 0 ]; do
+  ROUTES+=("$1"); BODIES+=("${2:-}"); shift; [ $# -gt 0 ] && shift
+  if [ $# -gt 0 ] && [[ "$1" != /* ]]; then VARIES+=("$1"); shift; else VARIES+=("${VARY:-}"); fi
+done
 DURATION="${DURATION:-10s}"
 CONNECTIONS="${CONNECTIONS:-32}"
 THREADS="${THREADS:-2}"
@@ -23,9 +32,11 @@ WARMUP="${WARMUP:-3s}"
 HOST=127.0.0.1
 
 command -v wrk >/dev/null || { echo "wrk is not installed (apt-get install wrk)" >&2; exit 2; }
-if [ -n "$ROUTE" ] && { [ -z "$BODY" ] || [ ! -f "$BODY" ]; }; then
-  echo "a POST route needs a body file: $0 $ROUTE <body.json>" >&2; exit 2
-fi
+for i in "${!ROUTES[@]}"; do
+  if [ -z "${BODIES[$i]}" ] || [ ! -f "${BODIES[$i]}" ]; then
+    echo "a POST route needs a body file: $0 ${ROUTES[$i]} <body.json>" >&2; exit 2
+  fi
+done
 if [ ! -f target/coilwright.jar ]; then
   echo "building target/coilwright.jar ..."
   mvn -o -q -DskipTests package
@@ -56,27 +67,32 @@ echo "startup: ${startup_ms} ms from java -jar to the first answered /health (he
 rss_mb() { awk '/VmRSS/ {printf "%.0f", $2 / 1024}' "/proc/$SERVER_PID/status"; }
 echo "RSS at start: $(rss_mb) MB"
 
-run() { # name url [body]
+run() { # name url [body [vary]]
   local out
-  out=$(WRK_BODY_FILE="${3:-}" WRK_VARY="$VARY" wrk -t"$THREADS" -c"$CONNECTIONS" -d"$DURATION" --latency -s scripts/wrk-report.lua "$2")
+  out=$(WRK_BODY_FILE="${3:-}" WRK_VARY="${4:-}" wrk -t"$THREADS" -c"$CONNECTIONS" -d"$DURATION" --latency -s scripts/wrk-report.lua "$2")
   local line
   line=$(grep '^RESULT' <<<"$out")
   echo "$1: ${line#RESULT }" >&2
   sed -E 's/.*rps=([0-9.]+).*/\1/' <<<"$line"
 }
 
-# Warm-up (JIT) on both routes before measuring; its figures are not reported.
+# Warm-up (JIT) on every route before measuring; its figures are not reported.
 WRK_BODY_FILE="" wrk -t"$THREADS" -c"$CONNECTIONS" -d"$WARMUP" "http://$HOST:$PORT/health" >/dev/null
-if [ -n "$ROUTE" ]; then
-  WRK_BODY_FILE="$BODY" WRK_VARY="$VARY" wrk -t"$THREADS" -c"$CONNECTIONS" -d"$WARMUP" -s scripts/wrk-report.lua "http://$HOST:$PORT$ROUTE" >/dev/null
-fi
+for i in "${!ROUTES[@]}"; do
+  WRK_BODY_FILE="${BODIES[$i]}" WRK_VARY="${VARIES[$i]}" wrk -t"$THREADS" -c"$CONNECTIONS" -d"$WARMUP" \
+    -s scripts/wrk-report.lua "http://$HOST:$PORT${ROUTES[$i]}" >/dev/null
+done
+echo "load average before measuring: $(cut -d' ' -f1-3 /proc/loadavg) ($(nproc) cores)"
 health_rps=$(run "GET /health" "http://$HOST:$PORT/health")
-if [ -n "$ROUTE" ]; then
-  route_rps=$(run "POST $ROUTE" "http://$HOST:$PORT$ROUTE" "$BODY")
-  label="POST $ROUTE${VARY:+ (uncached: $VARY varied)}"
-else
+if [ ${#ROUTES[@]} -eq 0 ]; then
   route_rps=$(run "GET /health (again)" "http://$HOST:$PORT/health")
-  label="GET /health (again)"
+  python3 -c "print(f'ratio: GET /health (again) / GET /health throughput = {float($route_rps) / float($health_rps):.2f}')"
 fi
+for i in "${!ROUTES[@]}"; do
+  vary="${VARIES[$i]}"
+  label="POST ${ROUTES[$i]}${vary:+ (uncached: $vary varied)}"
+  route_rps=$(run "$label" "http://$HOST:$PORT${ROUTES[$i]}" "${BODIES[$i]}" "$vary")
+  python3 -c "print(f'ratio: {\"$label\"} / GET /health throughput = {float($route_rps) / float($health_rps):.3f}')"
+done
 echo "RSS at end: $(rss_mb) MB"
-python3 -c "print(f'ratio: {\"$label\"} / GET /health throughput = {float($route_rps) / float($health_rps):.2f}')"
+echo "load average after: $(cut -d' ' -f1-3 /proc/loadavg)"

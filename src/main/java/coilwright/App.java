@@ -26,6 +26,7 @@ import coilwright.web.pages.DesignPage;
 import coilwright.web.pages.RevisionForm;
 import coilwright.web.pages.HomePage;
 import coilwright.web.pages.ThymeleafRenderer;
+import coilwright.web.pages.WarmUp;
 import coilwright.web.pages.WindingPage;
 import coilwright.web.rewind.RewindApi;
 import coilwright.web.rewind.RewindPage;
@@ -60,6 +61,8 @@ public final class App {
     private final List<Route> routes;
     private final Database database;
     private final Services services;
+    private final ThymeleafRenderer renderer = new ThymeleafRenderer();
+    private final AtomicBoolean running = new AtomicBoolean(true);
     private final ExecutorService demoLoader = Executors.newSingleThreadExecutor(r -> new Thread(r, "coilwright-demos"));
 
     private App(AppConfig config, List<Route> extraRoutes, Optional<ExampleCatalogue> examples) {
@@ -72,7 +75,6 @@ public final class App {
                         Optional.ofNullable(System.getenv("COILWRIGHT_DB_PASSWORD")))));
         Json.mapper();
         Metrics metrics = new Metrics();
-        ThymeleafRenderer renderer = new ThymeleafRenderer();
         this.database = joinOpening(opening);
         this.services = examples.map(e -> Services.create(database, Json.mapper(), e))
                 .orElseGet(() -> Services.create(database, Json.mapper()));
@@ -193,6 +195,7 @@ public final class App {
                 Route.get("/design/results", work.guard(design::exampleResults)),
                 Route.get("/design/bench", work.guard(design::bench)),
                 Route.get("/winding", work.guard(winding::show)),
+                Route.get(WindingPage.DRAWING, work.guard(winding::drawing)),
                 Route.get("/match/wind", match::windForm),
                 Route.post("/match/wind", work.guard(match::windResult)),
                 Route.get("/match/hydro", match::hydroForm),
@@ -242,7 +245,20 @@ public final class App {
         }
         demoLoader.execute(this::loadDemos);
         demoLoader.shutdown();
+        if (config.warmUp()) {
+            Thread warming = new Thread(this::warmUp, "coilwright-warm-up");
+            warming.setDaemon(true);
+            warming.setPriority(Thread.MIN_PRIORITY);
+            warming.start();
+        }
         return this;
+    }
+
+    /** The first requests' work done once in the background (see {@link WarmUp}); stops early when the app stops. */
+    private void warmUp() {
+        long t0 = System.nanoTime();
+        int pages = WarmUp.run(services.evaluation(), services.examples(), renderer, running::get);
+        LOG.info("warm-up: {} example evaluations and results pages in {} ms", pages, (System.nanoTime() - t0) / 1_000_000);
     }
 
     /** Stores the example designs as demos (idempotent; unchanged examples cost no evaluation). */
@@ -261,6 +277,7 @@ public final class App {
 
     /** Stops listening, waits for the demo loader, and closes the database. */
     public void stop() {
+        running.set(false);
         javalin.stop();
         services.sizing().close();
         demoLoader.shutdown();

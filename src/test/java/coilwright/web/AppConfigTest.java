@@ -22,7 +22,7 @@ class AppConfigTest {
     void environment_variables_set_every_value() {
         AppConfig c = AppConfig.from(Map.of("COILWRIGHT_PORT", "8081", "COILWRIGHT_DATA_DIR", "/tmp/x",
                 "COILWRIGHT_DB_URL", "jdbc:postgresql://127.0.0.1/test", "COILWRIGHT_MAX_BODY_BYTES", "2048"));
-        assertEquals(new AppConfig(8081, Path.of("/tmp/x"), "jdbc:postgresql://127.0.0.1/test", 2048), c);
+        assertEquals(new AppConfig(8081, Path.of("/tmp/x"), "jdbc:postgresql://127.0.0.1/test", 2048).withWarmUp(true), c);
     }
 
     @Test
@@ -43,5 +43,15 @@ class AppConfigTest {
                 .getMessage().contains("port = 70000"));
         assertTrue(assertThrows(IllegalArgumentException.class, () -> AppConfig.from(Map.of("COILWRIGHT_PORT", "web")))
                 .getMessage().contains("port = web: must be a whole number"));
+    }
+
+    @Test
+    void the_service_warms_up_unless_told_not_to_and_settings_built_in_code_do_not() {
+        assertTrue(AppConfig.from(Map.of()).warmUp());
+        assertEquals(false, AppConfig.from(Map.of("COILWRIGHT_WARM_UP", "false")).warmUp());
+        assertEquals(false, AppConfig.from(Map.of(), "--warm-up=false").warmUp());
+        assertEquals(false, AppConfig.defaults().warmUp());
+        assertTrue(assertThrows(IllegalArgumentException.class, () -> AppConfig.from(Map.of(), "--warm-up", "yes"))
+                .getMessage().contains("warm-up = yes: must be true or false"));
     }
 }

@@ -43,6 +43,11 @@ public final class SvgCharts {
 
     /** The chart as one {@code <svg>} element with {@code role="img"} and a {@code <title>}. */
     public static String lineChart(ChartSpec spec) {
+        return lineChart(spec, SvgCompaction.TOLERANCE_PX);
+    }
+
+    /** As {@link #lineChart(ChartSpec)}, each curve drawn within {@code tolerancePx} of every one of its points. */
+    static String lineChart(ChartSpec spec, double tolerancePx) {
         JFreeChart chart = ChartFactory.createXYLineChart(spec.title(), spec.x().text(), spec.left().text(),
                 dataset(spec.leftSeries()), PlotOrientation.VERTICAL, true, false, false);
         XYPlot plot = chart.getXYPlot();
@@ -57,7 +62,7 @@ public final class SvgCharts {
             plot.mapDatasetToRangeAxis(1, 1);
             plot.setRenderer(1, renderer(spec.leftSeries().size(), spec.rightSeries().size(), true));
         });
-        return svg(chart, spec.title(), spec.widthPx(), spec.heightPx());
+        return svg(chart, spec.title(), spec.widthPx(), spec.heightPx(), tolerancePx);
     }
 
     /**
@@ -106,18 +111,32 @@ public final class SvgCharts {
 
     /** Draws a chart into one {@code <svg>} element with its own id, {@code role="img"} and a {@code <title>}. */
     static String svg(JFreeChart chart, String title, int widthPx, int heightPx) {
+        return svg(chart, title, widthPx, heightPx, SvgCompaction.TOLERANCE_PX);
+    }
+
+    private static String svg(JFreeChart chart, String title, int widthPx, int heightPx, double tolerancePx) {
         String id = "chart-" + IDS.incrementAndGet();
         SVGGraphics2D g2 = new SVGGraphics2D(widthPx, heightPx);
         g2.setDefsKeyPrefix(id + "-");
-        g2.setGeomDoubleConverter(SvgCharts::twoDecimals);
+        g2.setGeomDoubleConverter(SvgCompaction::tenth);
+        if (chart.getPlot() instanceof XYPlot xy) {
+            // One path per curve rather than one line element per segment, so the curve can be thinned.
+            for (int i = 0; i < xy.getRendererCount(); i++) {
+                if (xy.getRenderer(i) instanceof XYLineAndShapeRenderer lines) {
+                    lines.setDrawSeriesLineAsPath(true);
+                }
+            }
+        }
         chart.draw(g2, new Rectangle(0, 0, widthPx, heightPx));
-        String svg = presentationAttributes(g2.getSVGElement(id));
+        String svg = SvgCompaction.compact(presentationAttributes(g2.getSVGElement(id)), id, widthPx, heightPx,
+                tolerancePx);
         int open = svg.indexOf('>', svg.indexOf("<svg"));
         return svg.substring(0, open) + " role=\"img\" aria-labelledby=\"" + id + "-title\">"
                 + "<title id=\"" + id + "-title\">" + escape(title) + "</title>" + svg.substring(open + 1);
     }
 
     private static final java.util.regex.Pattern STYLE = java.util.regex.Pattern.compile("style='([^']*)'");
+    private static final java.util.regex.Pattern PROPERTY = java.util.regex.Pattern.compile("[a-z-]+");
     private static final java.util.regex.Pattern LONG_DECIMAL = java.util.regex.Pattern.compile("(\\d+\\.\\d{2})\\d+");
 
     /**
@@ -137,7 +156,7 @@ public final class SvgCharts {
                 }
                 String name = declaration.substring(0, colon).strip();
                 String value = LONG_DECIMAL.matcher(declaration.substring(colon + 1).strip()).replaceAll("$1");
-                if (!name.matches("[a-z-]+") || value.contains("\"") || value.contains("'")) {
+                if (!PROPERTY.matcher(name).matches() || value.contains("\"") || value.contains("'")) {
                     continue;
                 }
                 if (attrs.length() > 0) {
@@ -192,11 +211,6 @@ public final class SvgCharts {
         axis.setTickLabelFont(new Font(FONT, Font.PLAIN, 12));
         axis.setLabelPaint(new Color(0x1c2329));
         axis.setTickLabelPaint(new Color(0x1c2329));
-    }
-
-    /** Coordinates to 0.01 px: a third smaller SVG, no visible change. */
-    private static String twoDecimals(double v) {
-        return Double.toString(Math.rint(v * 100.0) / 100.0);
     }
 
     private static String escape(String text) {

@@ -42,12 +42,16 @@ public final class ThymeleafRenderer implements FileRenderer {
 
     @Override
     public String render(String filePath, Map<String, ?> model, Context ctx) {
+        return render(filePath, model, ctx.path(), UnitsSwitch.here(ctx), Units.of(ctx));
+    }
+
+    /** As a request for {@code path} (its own address {@code here}) in {@code units} would render it. */
+    public String render(String filePath, Map<String, ?> model, String path, String here, Units units) {
         org.thymeleaf.context.Context page = new org.thymeleaf.context.Context(Locale.ROOT);
         page.setVariables(new java.util.HashMap<>(model));
-        page.setVariable("path", ctx.path());
-        page.setVariable("here", UnitsSwitch.here(ctx));
+        page.setVariable("path", path);
+        page.setVariable("here", here);
         page.setVariable("words", coilwright.web.Words.INSTANCE);
-        Units units = Units.of(ctx);
         page.setVariable("units", units);
         page.setVariable("fmt", new Fmt(units));
         return render(filePath, page);

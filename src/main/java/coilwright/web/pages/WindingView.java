@@ -24,10 +24,12 @@ import java.util.Locale;
  * @param coils        per coil: number, start slot, return slot, phase, connection
  * @param phaseOrder   per phase: its letter, its swatch class and, per parallel path, the coils in series ("1, −4, 7")
  * @param ring         inline SVG of the ring seen from the connection end ({@link RingDiagram})
+ * @param spec         the winding's query for {@link WindingPage} (slots=..&amp;poles=..), so a page can show the
+ *                     drawings as images of their own address instead of inline
  */
 public record WindingView(List<UnrolledWinding> developments, List<String> phases, boolean twoLayers,
                           List<WindingFacts.Fact> facts, String factorChart, WindingFacts.FactorTable factorTable,
-                          List<List<String>> coils, List<PhaseOrder> phaseOrder, String ring) {
+                          List<List<String>> coils, List<PhaseOrder> phaseOrder, String ring, String spec) {
 
     /** One phase's coils in connection order, per parallel path. */
     public record PhaseOrder(String phase, String swatch, List<String> paths) {
@@ -53,7 +55,12 @@ public record WindingView(List<UnrolledWinding> developments, List<String> phase
         }
         return new WindingView(developments, phases, w.spec().layers() == Layers.DOUBLE,
                 WindingFacts.headline(w, developments.get(0).sections()), WindingFacts.factorChart(w),
-                WindingFacts.factorTable(w), coils, order, RingDiagram.svg(w));
+                WindingFacts.factorTable(w), coils, order, RingDiagram.svg(w), WindingPage.query(w.spec()));
+    }
+
+    /** The address of one drawing as an SVG image: a development's variant ({@code wide}, ...) or {@code ring}. */
+    public String drawing(String view) {
+        return WindingPage.DRAWING + "?" + spec + "&view=" + view;
     }
 
     static String f(String format, double v) {

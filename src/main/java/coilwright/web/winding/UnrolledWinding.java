@@ -61,6 +61,11 @@ public record UnrolledWinding(String variant, int slots, int poles, int sections
         return num(Math.rint(width * 1.5));
     }
 
+    /** The height that goes with {@link #displayWidth()}. */
+    public String displayHeight() {
+        return num(Math.rint(height * 1.5));
+    }
+
     public String viewBox() {
         return "0 0 " + num(width) + " " + num(height);
     }

@@ -58,7 +58,7 @@ class SvgChartsTest {
     void paints_with_presentation_attributes_not_inline_style_so_a_strict_policy_allows_it() throws Exception {
         String svg = SvgCharts.lineChart(emfChart());
         assertFalse(svg.contains("style="), "no style attribute");
-        assertTrue(svg.contains("stroke=\"rgb("), "the series keep their colour");
+        assertTrue(svg.contains("stroke=\"#9a4311\""), "the series keep their colour");
         assertFalse(java.util.regex.Pattern.compile("stroke-width=\"\\d+\\.\\d{3,}").matcher(svg).find(),
                 "long decimals are cut: 2.200000047683716 -> 2.2");
         parse(svg);
@@ -82,6 +82,38 @@ class SvgChartsTest {
         assertThrows(IllegalArgumentException.class, () -> new Series("s", new double[] {1, 2}, new double[] {1}));
         assertThrows(IllegalArgumentException.class, () -> ChartSpec.of("t", new ChartSpec.Axis("x", "m"),
                 new ChartSpec.Axis("y", "m"), List.of()));
+    }
+
+    /** The vertices of the longest path drawn in the series' colour (the curve, not its legend swatch). */
+    private static List<double[]> curve(String svg, String colour) {
+        java.util.regex.Matcher m = java.util.regex.Pattern.compile("stroke=\"" + colour + "\"[^>]*><path d='([^']*)'")
+                .matcher(svg);
+        String longest = "";
+        while (m.find()) {
+            longest = m.group(1).length() > longest.length() ? m.group(1) : longest;
+        }
+        List<double[]> points = new java.util.ArrayList<>();
+        java.util.regex.Matcher p = java.util.regex.Pattern.compile("[ML](-?[0-9.]+),(-?[0-9.]+)").matcher(longest);
+        while (p.find()) {
+            points.add(new double[] {Double.parseDouble(p.group(1)), Double.parseDouble(p.group(2))});
+        }
+        return points;
+    }
+
+    @Test
+    void a_curve_of_a_thousand_points_is_drawn_with_few_and_keeps_its_peak_where_it_is() {
+        double[] x = IntStream.range(0, 1000).mapToDouble(i -> i * 0.6).toArray();
+        double[] y = IntStream.range(0, 1000).mapToDouble(i -> i == 613 ? 950 : 400 + 300 * Math.sin(i / 90.0)).toArray();
+        ChartSpec spec = ChartSpec.of("Spike", new ChartSpec.Axis("Speed", "rpm"), new ChartSpec.Axis("Power", "W"),
+                List.of(new Series("Power", x, y)));
+        List<double[]> every = curve(SvgCharts.lineChart(spec, -1.0), "#9a4311"); // a negative tolerance keeps every point
+        List<double[]> thin = curve(SvgCharts.lineChart(spec), "#9a4311");
+        assertEquals(1000, every.size(), "without thinning every point is drawn");
+        assertTrue(thin.size() < 150, "thinned to " + thin.size() + " points");
+        double peak = every.stream().mapToDouble(p -> p[1]).min().orElseThrow();
+        assertEquals(peak, thin.stream().mapToDouble(p -> p[1]).min().orElseThrow(), 1e-9, "the peak is drawn at its height");
+        assertTrue(thin.stream().anyMatch(p -> Math.abs(p[0] - every.get(613)[0]) < 1e-9 && p[1] == peak),
+                "and at its speed");
     }
 
     @Test

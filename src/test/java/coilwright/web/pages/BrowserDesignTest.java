@@ -96,7 +96,13 @@ class BrowserDesignTest {
             elementShot(d, "section.winding", "results-resistor-winding");
             assertEquals("none", d.findElement(By.cssSelector("#cut-in .value")).getText());
             assertEquals(3, d.findElements(By.cssSelector(".charts .chart svg")).size(), "the speed-range charts");
-            assertEquals(9, d.findElements(By.cssSelector("figure.unrolled.wide g.loop")).stream()
+            WebElement unrolled = d.findElement(By.cssSelector("figure.unrolled img"));
+            new org.openqa.selenium.interactions.Actions(d).scrollToElement(unrolled).perform();
+            new org.openqa.selenium.support.ui.WebDriverWait(d, java.time.Duration.ofSeconds(10)).until(x ->
+                    ((Number) d.executeScript("return arguments[0].complete && arguments[0].naturalWidth", unrolled))
+                            .intValue() > 0);
+            d.get(unrolled.getAttribute("src"));
+            assertEquals(9, d.findElements(By.cssSelector("g.loop")).stream()
                     .map(e -> e.getAttribute("data-coil")).distinct().count(), "9 coils in the 9 slots of the form, double layer");
         }
     }
