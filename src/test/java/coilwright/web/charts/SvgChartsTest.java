@@ -115,19 +115,4 @@ class SvgChartsTest {
         assertTrue(thin.stream().anyMatch(p -> Math.abs(p[0] - every.get(613)[0]) < 1e-9 && p[1] == peak),
                 "and at its speed");
     }
-
-    @Test
-    void renders_four_charts_fast_enough_for_one_results_page() {
-        for (int i = 0; i < 10; i++) {
-            SvgCharts.lineChart(emfChart());
-        }
-        int n = 40;
-        long start = System.nanoTime();
-        for (int i = 0; i < n; i++) {
-            SvgCharts.lineChart(emfChart());
-        }
-        double msPerChart = (System.nanoTime() - start) / 1e6 / n;
-        System.out.printf("SvgCharts: %.2f ms per chart (41 points x 3 series, two y axes)%n", msPerChart);
-        assertTrue(msPerChart < 100, "ms per chart = " + msPerChart);
-    }
 }
