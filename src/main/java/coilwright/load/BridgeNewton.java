@@ -2,8 +2,9 @@ package coilwright.load;
 
 /**
  * Newton's method on the periodic residual of the bridge (Map(x0) unshifted minus x0, on the independent branch
- * currents at anchor time ta), with a forward-difference Jacobian kept as a chord while it converges fast and
- * updated by Broyden's formula; {@link #damped} recomputes it at every step and searches the line further (the
+ * currents at anchor time ta), with the exact Jacobian that every residual's sweep carries (the state transition of
+ * each linear segment and the saltation at each event, see {@link BridgeSweep#endSensitivity}); a forward-difference
+ * Jacobian only where that is not finite (an event met tangentially). {@link #damped} searches the line further (the
  * fallback). Convergence is tested against the state's size and against the rounding noise of the sweep's
  * waveforms. See {@link BridgeSolver} for the method and the fallbacks around it.
  */
@@ -16,15 +17,13 @@ final class BridgeNewton {
     private final BridgeModel md;
     private final double ta;
     private final double[] y0;
-    double[][] jac;
-    /** Fresh Jacobian at every step and a longer line search (the fallback). */
+    /** A longer line search and more steps (the fallback). */
     boolean damped;
 
-    BridgeNewton(BridgeModel md, double ta, double[] y0, double[][] jac) {
+    BridgeNewton(BridgeModel md, double ta, double[] y0) {
         this.md = md;
         this.ta = ta;
         this.y0 = y0;
-        this.jac = jac;
     }
 
     BridgeSweep solve() {
@@ -41,9 +40,7 @@ final class BridgeNewton {
                     || it >= maxSteps / 2 && norm(r.value) <= Math.max(ACCEPT_TOLERANCE * size, noise)) {
                 return r.sweep;
             }
-            if (jac == null || damped) {
-                jac = jacobian(md, ta, y, r, size);
-            }
+            double[][] jac = finite(r.jacobian) ? r.jacobian : finiteDifferenceJacobian(md, ta, y, r.value, size);
             double[] step = solveSmall(jac, r.value);
             if (!finite(step)) {
                 throw new NoPeriodicSolution("singular Newton matrix (residual " + norm(r.value) + " A)");
@@ -68,11 +65,6 @@ final class BridgeNewton {
                 md.unshift(r.sweep.end, fp);
                 next = new Residual(md, ta, java.util.Arrays.copyOf(fp, n));
             }
-            if (norm(next.value) > 0.1 * norm(r.value)) {
-                jac = null;
-            } else if (jac != null && next.y != null) {
-                broyden(jac, y, r.value, next.y, next.value);
-            }
             r = next;
             y = next.y;
         }
@@ -80,35 +72,13 @@ final class BridgeNewton {
                 + " Newton steps (residual " + norm(r.value) + " A)");
     }
 
-    /**
-     * Broyden's rank-one update of the Jacobian after the step y0 -> y1 with residuals r0 -> r1 (Broyden, "A class
-     * of methods for solving nonlinear simultaneous equations", Math. Comp. 19, 1965): the chord becomes secant.
-     */
-    private static void broyden(double[][] jac, double[] y0, double[] r0, double[] y1, double[] r1) {
-        int n = y0.length;
-        double ss = 0;
-        double[] s = new double[n];
-        for (int i = 0; i < n; i++) {
-            s[i] = y1[i] - y0[i];
-            ss += s[i] * s[i];
-        }
-        if (!(ss > 0)) {
-            return;
-        }
-        for (int i = 0; i < n; i++) {
-            double js = 0;
-            for (int j = 0; j < n; j++) {
-                js += jac[i][j] * s[j];
-            }
-            double u = (r1[i] - r0[i] - js) / ss;
-            for (int j = 0; j < n; j++) {
-                jac[i][j] += u * s[j];
-            }
-        }
+    /** The exact Jacobian of the residual at y (anchor time ta). */
+    static double[][] exactJacobian(BridgeModel md, double ta, double[] y) {
+        return new Residual(md, ta, y).jacobian;
     }
 
-    /** Forward-difference Jacobian of the residual (reused while it keeps converging fast: a chord method). */
-    private static double[][] jacobian(BridgeModel md, double ta, double[] y, Residual r, double size) {
+    /** Forward-difference Jacobian of the residual r at y, steps of 1e-7 of {@code size}. */
+    static double[][] finiteDifferenceJacobian(BridgeModel md, double ta, double[] y, double[] r, double size) {
         int n = y.length;
         double[][] jac = new double[n][n];
         for (int j = 0; j < n; j++) {
@@ -117,16 +87,18 @@ final class BridgeNewton {
             yj[j] += h;
             Residual rj = new Residual(md, ta, yj);
             for (int i = 0; i < n; i++) {
-                jac[i][j] = (rj.value[i] - r.value[i]) / h;
+                jac[i][j] = (rj.value[i] - r[i]) / h;
             }
         }
         return jac;
     }
 
-    /** Map(x0) unshifted minus x0, on the independent branch currents. */
-    private static final class Residual {
+    /** Map(x0) unshifted minus x0, on the independent branch currents, and its exact Jacobian. */
+    static final class Residual {
         final double[] y;
         final double[] value;
+        /** d value / d y, from the sweep's exact sensitivity. */
+        final double[][] jacobian;
         final BridgeSweep sweep;
 
         Residual(BridgeModel md, double t0, double[] y) {
@@ -138,12 +110,25 @@ final class BridgeNewton {
                 sum += y[i];
             }
             x0[md.m - 1] = -sum;
-            sweep = new BridgeSweep(md, t0, x0);
+            sweep = new BridgeSweep(md, t0, x0, true);
             double[] back = new double[md.m];
             md.unshift(sweep.end, back);
             value = new double[y.length];
             for (int i = 0; i < y.length; i++) {
                 value[i] = back[i] - y[i];
+            }
+            int n = y.length;
+            jacobian = new double[n][n];
+            double[] column = new double[md.m];
+            double[] shifted = new double[md.m];
+            for (int c = 0; c < n; c++) {
+                for (int k = 0; k < md.m; k++) {
+                    column[k] = sweep.endSensitivity[k][c];
+                }
+                md.unshift(column, shifted);
+                for (int i = 0; i < n; i++) {
+                    jacobian[i][c] = shifted[i] - (i == c ? 1 : 0);
+                }
             }
         }
     }
@@ -154,6 +139,15 @@ final class BridgeNewton {
         }
         double det = a[0][0] * a[1][1] - a[0][1] * a[1][0];
         return new double[] {(b[0] * a[1][1] - a[0][1] * b[1]) / det, (a[0][0] * b[1] - a[1][0] * b[0]) / det};
+    }
+
+    private static boolean finite(double[][] a) {
+        for (double[] row : a) {
+            if (!finite(row)) {
+                return false;
+            }
+        }
+        return true;
     }
 
     private static boolean finite(double[] v) {

@@ -151,6 +151,59 @@ final class BridgeSegment {
         }
     }
 
+    /**
+     * The branch currents' sensitivity at tau to the state at the segment's start: {@code out = A(tau) in} for a
+     * matrix {@code in} of m rows (one column per direction). The homogeneous part of the solution is
+     * A(tau) = exp(lambda1 tau) P + (exp(lambda2 tau) - exp(lambda1 tau)) g h^T P / (h^T g), P the projection
+     * onto the conducting branches with zero sum (the mean removed), g the DC drop's distribution and h the
+     * upper rail (see the class comment); it is exact, since the particular solution does not depend on the state.
+     * Zero when no branch conducts. {@code out} must not be {@code in}.
+     */
+    void propagate(double tau, double[][] in, double[][] out) {
+        int m = md.m;
+        int n = nUp + nDown;
+        int directions = in[0].length;
+        if (n == 0) {
+            for (double[] row : out) {
+                java.util.Arrays.fill(row, 0);
+            }
+            return;
+        }
+        double e1 = Math.exp(lambda1 * tau);
+        double e2 = Math.exp(lambda2 * tau);
+        double upperShare = (double) nDown / n;
+        double lowerShare = -(double) nUp / n;
+        double railProduct = (double) nUp * nDown / n;
+        for (int c = 0; c < directions; c++) {
+            double mean = 0;
+            for (int k = 0; k < m; k++) {
+                mean += sign[k] != 0 ? in[k][c] : 0;
+            }
+            mean /= n;
+            double upper = 0;
+            for (int k = 0; k < m; k++) {
+                upper += sign[k] > 0 ? in[k][c] - mean : 0;
+            }
+            double dcMode = (e2 - e1) * upper / railProduct;
+            for (int k = 0; k < m; k++) {
+                out[k][c] = sign[k] == 0 ? 0
+                        : e1 * (in[k][c] - mean) + dcMode * (sign[k] > 0 ? upperShare : lowerShare);
+            }
+        }
+    }
+
+    /** Time derivative of every branch current at tau, A/s (zero for a blocked branch). */
+    void currentSlopesAt(double tau, double[] out) {
+        double[] bs = new double[NB];
+        basis(tau, bs);
+        double w = md.w;
+        for (int k = 0; k < md.m; k++) {
+            double[] c = current[k];
+            out[k] = sign[k] == 0 ? 0
+                    : w * (c[1] * bs[0] - c[0] * bs[1]) + lambda1 * c[3] * bs[3] + lambda2 * c[4] * bs[4];
+        }
+    }
+
     /** Coefficients of the EMF of branch k. */
     double[] emf(int k) {
         return new double[] {md.a[k], md.b[k], 0, 0, 0};

@@ -14,14 +14,15 @@ import java.util.Locale;
  * ({@link BridgeSweep}). The waveform repeats every 60 electrical degrees with the phases rotated and negated
  * (three-phase) or every half period negated (single-phase), so the periodic state solves
  * Map(x0) = P x0 over one such interval. Discontinuous conduction is found directly (an interval with no
- * diode conducting fixes the state to zero); otherwise the equation is solved by Newton's method with a
- * finite-difference Jacobian, started from a few fixed-point sweeps and anchored inside an interval where
- * the most diodes conduct (where the map is smooth). Shooting for periodic solutions of switched circuits
+ * diode conducting fixes the state to zero); otherwise the equation is solved by Newton's method with the
+ * exact Jacobian of the map (each segment's state transition in closed form and the saltation at each event:
+ * the event time moves with the state by the implicit function theorem on the event condition), started from a
+ * few fixed-point sweeps and anchored inside an interval where the most diodes conduct (where the map is smooth). Shooting for periodic solutions of switched circuits
  * follows Aprille and Trick (1972); the exact piecewise solution is the classical treatment of the bridge
  * in, e.g., Mohan, Undeland and Robbins, "Power Electronics", 2003, ch. 5.
  * <p>
- * Safeguards, in order: the warm start (when a sweep gives one); the cold start above; then Newton with a fresh
- * finite-difference Jacobian at every step and a longer line search (damped Newton) after more fixed-point sweeps;
+ * Safeguards, in order: the warm start (when a sweep gives one); the cold start above; then Newton with a longer
+ * line search (damped Newton) after more fixed-point sweeps;
  * then the plain fixed-point sweeps themselves, which are the circuit's own transient and contract with the factor
  * q = exp(-R T_s / L) per interval (the branch energy L |i - i'|^2 / 2 of two solutions decays at least at the rate
  * 2R/L: resistors dissipate and ideal diodes and the battery are monotone), stopped when the contraction bound
@@ -163,7 +164,7 @@ public final class BridgeSolver {
 
     /**
      * Fixed-point sweeps from rest, then Newton anchored inside the busiest segment. With {@code damped}, the
-     * Jacobian is recomputed at every step (no chord, no Broyden update) and the line search goes further.
+     * line search goes further and Newton may take more steps.
      */
     private static BridgeSweep coldNewton(BridgeModel md, BridgeWarmStart warm, int sweeps, boolean damped) {
         int m = md.m;
@@ -190,12 +191,12 @@ public final class BridgeSolver {
         double half = sw.durations.get(best) / 2;
         double[] xa = new double[md.m];
         anchor.currentsAt(half, xa);
-        BridgeNewton nt = new BridgeNewton(md, anchor.t0 + half, java.util.Arrays.copyOf(xa, md.m - 1), null);
+        BridgeNewton nt = new BridgeNewton(md, anchor.t0 + half, java.util.Arrays.copyOf(xa, md.m - 1));
         nt.damped = damped;
         BridgeSweep result = nt.solve();
         if (warm != null) {
             if (longestOff(result) < 0) {
-                warm.remember(result, md.w, nt.jac);
+                warm.remember(result, md.w);
             } else {
                 warm.forget();
             }
@@ -242,12 +243,12 @@ public final class BridgeSolver {
             return null;
         }
         try {
-            BridgeNewton nt = new BridgeNewton(md, anchorRad / md.w, y, warm.jacobian);
+            BridgeNewton nt = new BridgeNewton(md, anchorRad / md.w, y);
             BridgeSweep result = nt.solve();
             if (longestOff(result) >= 0) {
                 return null;
             }
-            warm.remember(result, md.w, nt.jac);
+            warm.remember(result, md.w);
             return result;
         } catch (NoPeriodicSolution | MathIllegalStateException | MathIllegalArgumentException e) {
             return null;

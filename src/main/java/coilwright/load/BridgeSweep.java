@@ -50,6 +50,12 @@ final class BridgeSweep {
      * current in this sweep is a small multiple of 1e-16 of it (the terms of a waveform can cancel to far less).
      */
     double coefficientMagnitudeA;
+    /**
+     * Derivative of {@link #end} with respect to the first m - 1 start currents (m rows, m - 1 columns), exact for
+     * the piecewise-linear circuit: each segment's state transition, and at each event the saltation term
+     * (the slope before minus the slope after, times the event time's gradient); null unless asked for.
+     */
+    final double[][] endSensitivity;
 
     private final BridgeModel md;
     private final double tolV;
@@ -66,8 +72,19 @@ final class BridgeSweep {
     private int evType;
     private int evK;
     private int evJ;
+    private int evFunction;
+    /** Set by a transition that sets every current to zero (the state no longer depends on the start). */
+    private boolean stateReset;
 
     BridgeSweep(BridgeModel md, double t0, double[] x0) {
+        this(md, t0, x0, false);
+    }
+
+    /**
+     * Traces the interval from state x0 at t0; with {@code sensitivity}, also the end state's derivative with
+     * respect to the first m - 1 start currents (the last one is minus their sum), see {@link #endSensitivity}.
+     */
+    BridgeSweep(BridgeModel md, double t0, double[] x0, boolean sensitivity) {
         this.md = md;
         this.t0 = t0;
         this.tolV = 1e-12 * (md.emfPeakV + md.v0);
@@ -90,12 +107,18 @@ final class BridgeSweep {
             up += sign[k] > 0 ? 1 : 0;
             down += sign[k] < 0 ? 1 : 0;
         }
+        double[][] sens = sensitivity ? initialSensitivity(md.m) : null;
+        double[][] next = sensitivity ? new double[md.m][md.m - 1] : null;
         if (up == 0 || down == 0) {
             java.util.Arrays.fill(sign, 0);
             java.util.Arrays.fill(x, 0);
+            clear(sens);
         }
         double t = t0;
         BridgeSegment seg = settle(sign, t, x);
+        double[] slopeBefore = new double[md.m];
+        double[] slopeAfter = new double[md.m];
+        double[] tauGradient = new double[md.m - 1];
         for (int events = 0; ; events++) {
             if (events > MAX_EVENTS) {
                 throw new NoPeriodicSolution("more than " + MAX_EVENTS
@@ -106,13 +129,43 @@ final class BridgeSweep {
                 add(seg, tEnd - t, null);
                 x = new double[md.m];
                 seg.currentsAt(tEnd - t, x);
+                if (sens != null) {
+                    seg.propagate(tEnd - t, sens, next);
+                    sens = next;
+                }
                 break;
             }
             double tau = evTau;
             add(seg, tau, null);
             seg.currentsAt(tau, x);
+            if (sens != null) {
+                seg.propagate(tau, sens, next);
+                if (evType != PAIR) {
+                    eventTimeGradient(seg, tau, next, tauGradient);
+                    seg.currentSlopesAt(tau, slopeBefore);
+                }
+            }
             t += tau;
+            stateReset = false;
             seg = transition(seg, evType, evK, evJ, t, x);
+            if (sens != null) {
+                if (evType == PAIR) {
+                    clear(next); // from rest at a window start fixed by the EMFs alone
+                } else {
+                    // saltation: the state reaches the event with the old slope and the new segment starts when the
+                    // event does; after a reset the start state is zero whatever the event time
+                    seg.currentSlopesAt(0, slopeAfter);
+                    for (int k = 0; k < md.m; k++) {
+                        for (int c = 0; c < tauGradient.length; c++) {
+                            next[k][c] = (stateReset ? 0 : next[k][c] + slopeBefore[k] * tauGradient[c])
+                                    - slopeAfter[k] * tauGradient[c];
+                        }
+                    }
+                }
+                double[][] swap = sens;
+                sens = next;
+                next = swap;
+            }
             if (evType == PAIR && seg.conducting() == 2) {
                 BridgePulse pulse = BridgePulse.of(md, evK, evJ, (tEnd - t) * md.w);
                 if (pulse != null) {
@@ -121,11 +174,62 @@ final class BridgeSweep {
                     t += d;
                     java.util.Arrays.fill(x, 0);
                     seg = settle(new int[md.m], t, x);
+                    clear(sens);
                 }
             }
         }
+        endSensitivity = sens;
         end = x;
     }
+
+    /** The derivative of the start state x0 = (y, -sum y) with respect to y: the identity over minus ones. */
+    private static double[][] initialSensitivity(int m) {
+        double[][] d = new double[m][m - 1];
+        for (int c = 0; c < m - 1; c++) {
+            d[c][c] = 1;
+            d[m - 1][c] = -1;
+        }
+        return d;
+    }
+
+    private static void clear(double[][] d) {
+        if (d != null) {
+            for (double[] row : d) {
+                java.util.Arrays.fill(row, 0);
+            }
+        }
+    }
+
+    /**
+     * Gradient of the event time with respect to the start currents, from the implicit function theorem on the event
+     * function F(tau, x0) = 0: dtau = -dF / F'(tau), where dF is F's derivative along the state's sensitivity
+     * {@code sens} at tau. A branch current depends on the state directly; a blocked branch's bias through the DC
+     * current (the rail potentials move with the DC drop). Zero for an event already due at the segment's start
+     * or met without a falling slope (the time does not move with the state there).
+     */
+    private void eventTimeGradient(BridgeSegment seg, double tau, double[][] sens, double[] out) {
+        java.util.Arrays.fill(out, 0);
+        double slope = value(seg, slopes[evFunction], tau, new double[BridgeSegment.NB]);
+        if (tau == 0 || !(slope < 0)) {
+            return;
+        }
+        int k = evK;
+        for (int c = 0; c < out.length; c++) {
+            double dF;
+            if (evType == CURRENT) {
+                dF = seg.sign[k] * sens[k][c];
+            } else {
+                double dcCurrent = 0;
+                for (int i = 0; i < md.m; i++) {
+                    dcCurrent += seg.sign[i] > 0 ? sens[i][c] : 0;
+                }
+                double upperShare = (double) seg.nDown / seg.conducting();
+                dF = md.rDc * (evType == JOIN_UP ? upperShare : 1 - upperShare) * dcCurrent;
+            }
+            out[c] = -dF / slope;
+        }
+    }
+
 
     /**
      * Branch currents at electrical angle theta = w t of this (periodic) solution, else null where only a pulse
@@ -191,6 +295,7 @@ final class BridgeSweep {
                 if (up == 0 || down == 0) {
                     java.util.Arrays.fill(sign, 0);
                     java.util.Arrays.fill(x, 0);
+                    stateReset = true;
                 }
             }
             case JOIN_UP -> sign[k] = 1;
@@ -220,6 +325,7 @@ final class BridgeSweep {
                 sign[md.pairK[p]] = 1;
                 sign[md.pairJ[p]] = -1;
                 java.util.Arrays.fill(x, 0);
+                stateReset = true;
                 continue;
             }
             double worst = -tolV;
@@ -395,6 +501,7 @@ final class BridgeSweep {
         evTau = tau;
         evType = fnType[f];
         evK = fnBranch[f];
+        evFunction = f;
         evJ = -1;
         return true;
     }

@@ -3,7 +3,7 @@ package coilwright.load;
 /**
  * What solved operating points tell the next one of a sweep over speed: the last few continuous-conduction
  * periodic solutions (for a predicted start state at one electrical angle, extrapolated in frequency by the
- * Lagrange polynomial through them) and the last Newton Jacobian (reused as a chord, updated by Broyden's formula).
+ * Lagrange polynomial through them).
  * Only a starting guess: the solver still converges to its own tolerance, and falls back to the cold start when
  * the guess fails. Mutable; one instance per sweep, not shared between threads.
  */
@@ -19,22 +19,19 @@ final class BridgeWarmStart {
     private final BridgeSweep[] sweeps = new BridgeSweep[HISTORY];
     private final double[] ws = new double[HISTORY];
     private int count;
-    /** Newton Jacobian of the last solution (independent currents at the anchor), or null. */
-    double[][] jacobian;
 
     /** Forgets everything (after a point with no or discontinuous conduction). */
     void forget() {
         java.util.Arrays.fill(sweeps, null);
         count = 0;
-        jacobian = null;
     }
 
     boolean ready() {
         return count > 0;
     }
 
-    /** Records a continuous-conduction solution and its Newton Jacobian. */
-    void remember(BridgeSweep sweep, double w, double[][] jac) {
+    /** Records a continuous-conduction solution. */
+    void remember(BridgeSweep sweep, double w) {
         for (int i = HISTORY - 1; i > 0; i--) {
             sweeps[i] = sweeps[i - 1];
             ws[i] = ws[i - 1];
@@ -42,13 +39,11 @@ final class BridgeWarmStart {
         sweeps[0] = sweep;
         ws[0] = w;
         count = Math.min(count + 1, HISTORY);
-        jacobian = jac;
     }
 
     /**
      * Electrical angle of the anchor for the next solve. The last anchor is kept while it stays well inside the
-     * last solution's busiest segment (so the chord Jacobian, which belongs to that anchor, stays apt); otherwise
-     * the middle of that segment.
+     * last solution's busiest segment; otherwise the middle of that segment.
      */
     double anchorRad() {
         BridgeSweep last = sweeps[0];
