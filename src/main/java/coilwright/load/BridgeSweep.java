@@ -1,6 +1,5 @@
 package coilwright.load;
 
-import org.apache.commons.math3.analysis.solvers.BrentSolver;
 import org.apache.commons.math3.optim.MaxEval;
 import org.apache.commons.math3.optim.nonlinear.scalar.GoalType;
 import org.apache.commons.math3.optim.univariate.BrentOptimizer;
@@ -33,6 +32,7 @@ final class BridgeSweep {
     static final double FAST_STEP_TIME_CONSTANTS = 0.5;
     private static final int MAX_EVENTS = 200;
     private static final int MAX_BRENT_EVALUATIONS = 200;
+    private static final int MAX_ROOT_ITERATIONS = 200;
 
     private static final int CURRENT = 0;
     private static final int JOIN_UP = 1;
@@ -489,8 +489,7 @@ final class BridgeSweep {
         if (!(value(seg, sl, lo, b) < 0 && value(seg, sl, hi, b) > 0)) {
             return Double.NaN;
         }
-        double tauMin = new BrentSolver(1e-15, EVENT_ACCURACY_RAD / md.w)
-                .solve(MAX_BRENT_EVALUATIONS, tau -> value(seg, sl, tau, b), lo, hi);
+        double tauMin = root(seg, sl, 0, lo, hi, b);
         if (value(seg, fns[f], tauMin, b) >= -fnTol[f]) {
             return Double.NaN;
         }
@@ -517,20 +516,77 @@ final class BridgeSweep {
         double tol = fnTol[f];
         double[] b = new double[BridgeSegment.NB];
         double flo = value(seg, fn, lo, b);
-        BrentSolver solver = new BrentSolver(1e-15, EVENT_ACCURACY_RAD / md.w);
         if (flo > tol) {
-            return solver.solve(MAX_BRENT_EVALUATIONS, tau -> value(seg, fn, tau, b), lo, hi);
+            return root(seg, fn, 0, lo, hi, b);
         }
         double peakTau = new BrentOptimizer(1e-10, EVENT_ACCURACY_RAD / md.w).optimize(new MaxEval(MAX_BRENT_EVALUATIONS),
                 new UnivariateObjectiveFunction(tau -> value(seg, fn, tau, b)), GoalType.MAXIMIZE,
                 new SearchInterval(lo, hi)).getPoint();
         if (value(seg, fn, peakTau, b) > tol) {
-            return solver.solve(MAX_BRENT_EVALUATIONS, tau -> value(seg, fn, tau, b), peakTau, hi);
+            return root(seg, fn, 0, peakTau, hi, b);
         }
         if (flo + tol <= 0) {
             return lo;
         }
-        return solver.solve(MAX_BRENT_EVALUATIONS, tau -> value(seg, fn, tau, b) + tol, lo, hi);
+        return root(seg, fn, tol, lo, hi, b);
+    }
+
+    /**
+     * The root of fn(tau) + shift in [lo, hi], where it changes sign, to {@link #EVENT_ACCURACY_RAD} (and 1e-15
+     * relative): Newton's method on the closed form, with the derivative's own closed form, kept inside the
+     * shrinking bracket (a bisection whenever a step would leave it or fails to halve the step before last), as in
+     * "rtsafe" of Press, Teukolsky, Vetterling and Flannery, "Numerical Recipes", 3rd ed., 2007, sec. 9.4. It
+     * converges quadratically where Brent's method on values alone takes several times as many evaluations.
+     *
+     * @throws NoPeriodicSolution when fn + shift has the same sign at both ends
+     */
+    private double root(BridgeSegment seg, double[] fn, double shift, double lo, double hi, double[] b) {
+        double fLo = value(seg, fn, lo, b) + shift;
+        double fHi = value(seg, fn, hi, b) + shift;
+        if (fLo == 0) {
+            return lo;
+        }
+        if (fHi == 0) {
+            return hi;
+        }
+        if (fLo > 0 == fHi > 0) {
+            throw new NoPeriodicSolution("an event function has the same sign at both ends of its bracket");
+        }
+        double[] slope = {md.w * fn[1], -md.w * fn[0], 0, seg.lambda1 * fn[3], seg.lambda2 * fn[4]};
+        double absolute = EVENT_ACCURACY_RAD / md.w;
+        // below: where fn + shift is negative; above: where it is positive
+        double below = fLo < 0 ? lo : hi;
+        double above = fLo < 0 ? hi : lo;
+        double tau = 0.5 * (lo + hi);
+        double stepBeforeLast = Math.abs(hi - lo);
+        double lastStep = stepBeforeLast;
+        for (int i = 0; i < MAX_ROOT_ITERATIONS; i++) {
+            seg.basis(tau, b);
+            double f = BridgeSegment.dot(fn, b) + shift;
+            double d = BridgeSegment.dot(slope, b);
+            if (f == 0) {
+                return tau;
+            }
+            if (f < 0) {
+                below = tau;
+            } else {
+                above = tau;
+            }
+            double newton = tau - f / d;
+            stepBeforeLast = lastStep;
+            if (newton > Math.min(below, above) && newton < Math.max(below, above)
+                    && Math.abs(f / d) < 0.5 * stepBeforeLast) {
+                lastStep = Math.abs(f / d);
+                tau = newton;
+            } else {
+                lastStep = 0.5 * Math.abs(above - below);
+                tau = 0.5 * (above + below);
+            }
+            if (lastStep <= absolute + 1e-15 * Math.abs(tau)) {
+                return tau;
+            }
+        }
+        return tau;
     }
 
     private static double value(BridgeSegment seg, double[] fn, double tau, double[] b) {
