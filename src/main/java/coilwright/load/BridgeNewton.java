@@ -2,10 +2,10 @@ package coilwright.load;
 
 /**
  * Newton's method on the periodic residual of the bridge (Map(x0) unshifted minus x0, on the independent branch
- * currents at anchor time ta), with the exact Jacobian that every residual's sweep carries (the state transition of
- * each linear segment and the saltation at each event, see {@link BridgeSweep#endSensitivity}); a forward-difference
+ * currents at anchor time anchorS, s), with the exact Jacobian that every residual's trace carries (the state transition of
+ * each linear segment and the saltation at each event, see {@link SymmetryIntervalTrace#endSensitivity}); a forward-difference
  * Jacobian only where that is not finite (an event met tangentially). {@link #damped} searches the line further (the
- * fallback). Convergence is tested against the state's size and against the rounding noise of the sweep's
+ * fallback). Convergence is tested against the state's size and against the rounding noise of the trace's
  * waveforms. See {@link BridgeSolver} for the method and the fallbacks around it.
  */
 final class BridgeNewton {
@@ -14,33 +14,33 @@ final class BridgeNewton {
     private static final double NEWTON_TOLERANCE = 1e-13;
     private static final double ACCEPT_TOLERANCE = 1e-9;
 
-    private final BridgeModel md;
-    private final double ta;
-    private final double[] y0;
+    private final BridgeModel model;
+    private final double anchorS;
+    private final double[] startCurrentsA;
     /** A longer line search and more steps (the fallback). */
     boolean damped;
 
-    BridgeNewton(BridgeModel md, double ta, double[] y0) {
-        this.md = md;
-        this.ta = ta;
-        this.y0 = y0;
+    BridgeNewton(BridgeModel model, double anchorS, double[] startCurrentsA) {
+        this.model = model;
+        this.anchorS = anchorS;
+        this.startCurrentsA = startCurrentsA;
     }
 
-    BridgeSweep solve() {
-        int n = md.m - 1;
-        double[] y = y0;
-        double scale = md.currentScaleA();
-        Residual r = new Residual(md, ta, y);
+    SymmetryIntervalTrace solve() {
+        int n = model.branches - 1;
+        double[] y = startCurrentsA;
+        double scale = model.currentScaleA();
+        Residual r = new Residual(model, anchorS, y);
         int maxSteps = damped ? MAX_DAMPED_NEWTON : MAX_NEWTON;
         double minLambda = damped ? 1e-6 : 1e-3;
         for (int it = 0; it < maxSteps; it++) {
             double size = Math.max(norm(y), 1e-3 * scale);
-            double noise = BridgeSolver.NOISE_TOLERANCE * r.sweep.coefficientMagnitudeA;
+            double noise = BridgeSolver.NOISE_TOLERANCE * r.trace.coefficientMagnitudeA;
             if (norm(r.value) <= Math.max(NEWTON_TOLERANCE * size, noise)
                     || it >= maxSteps / 2 && norm(r.value) <= Math.max(ACCEPT_TOLERANCE * size, noise)) {
-                return r.sweep;
+                return r.trace;
             }
-            double[][] jac = finite(r.jacobian) ? r.jacobian : finiteDifferenceJacobian(md, ta, y, r.value, size);
+            double[][] jac = finite(r.jacobian) ? r.jacobian : finiteDifferenceJacobian(model, anchorS, y, r.value, size);
             double[] step = solveSmall(jac, r.value);
             if (!finite(step)) {
                 throw new NoPeriodicSolution("singular Newton matrix (residual " + norm(r.value) + " A)");
@@ -51,7 +51,7 @@ final class BridgeNewton {
                 for (int i = 0; i < n; i++) {
                     yt[i] -= lambda * step[i];
                 }
-                Residual trial = new Residual(md, ta, yt);
+                Residual trial = new Residual(model, anchorS, yt);
                 if (norm(trial.value) < norm(r.value)) {
                     next = trial;
                     break;
@@ -59,11 +59,11 @@ final class BridgeNewton {
             }
             if (next == null) {
                 if (norm(r.value) <= Math.max(ACCEPT_TOLERANCE * size, noise)) {
-                    return r.sweep;
+                    return r.trace;
                 }
-                double[] fp = new double[md.m];
-                md.unshift(r.sweep.end, fp);
-                next = new Residual(md, ta, java.util.Arrays.copyOf(fp, n));
+                double[] fp = new double[model.branches];
+                model.unshift(r.trace.endCurrentsA, fp);
+                next = new Residual(model, anchorS, java.util.Arrays.copyOf(fp, n));
             }
             r = next;
             y = next.y;
@@ -72,20 +72,20 @@ final class BridgeNewton {
                 + " Newton steps (residual " + norm(r.value) + " A)");
     }
 
-    /** The exact Jacobian of the residual at y (anchor time ta). */
-    static double[][] exactJacobian(BridgeModel md, double ta, double[] y) {
-        return new Residual(md, ta, y).jacobian;
+    /** The exact Jacobian of the residual at y (anchor time anchorS). */
+    static double[][] exactJacobian(BridgeModel model, double anchorS, double[] y) {
+        return new Residual(model, anchorS, y).jacobian;
     }
 
     /** Forward-difference Jacobian of the residual r at y, steps of 1e-7 of {@code size}. */
-    static double[][] finiteDifferenceJacobian(BridgeModel md, double ta, double[] y, double[] r, double size) {
+    static double[][] finiteDifferenceJacobian(BridgeModel model, double anchorS, double[] y, double[] r, double size) {
         int n = y.length;
         double[][] jac = new double[n][n];
         for (int j = 0; j < n; j++) {
             double[] yj = y.clone();
             double h = 1e-7 * size;
             yj[j] += h;
-            Residual rj = new Residual(md, ta, yj);
+            Residual rj = new Residual(model, anchorS, yj);
             for (int i = 0; i < n; i++) {
                 jac[i][j] = (rj.value[i] - r[i]) / h;
             }
@@ -97,35 +97,35 @@ final class BridgeNewton {
     static final class Residual {
         final double[] y;
         final double[] value;
-        /** d value / d y, from the sweep's exact sensitivity. */
+        /** d value / d y, from the trace's exact sensitivity. */
         final double[][] jacobian;
-        final BridgeSweep sweep;
+        final SymmetryIntervalTrace trace;
 
-        Residual(BridgeModel md, double t0, double[] y) {
+        Residual(BridgeModel model, double t0, double[] y) {
             this.y = y;
-            double[] x0 = new double[md.m];
+            double[] x0 = new double[model.branches];
             double sum = 0;
             for (int i = 0; i < y.length; i++) {
                 x0[i] = y[i];
                 sum += y[i];
             }
-            x0[md.m - 1] = -sum;
-            sweep = new BridgeSweep(md, t0, x0, true);
-            double[] back = new double[md.m];
-            md.unshift(sweep.end, back);
+            x0[model.branches - 1] = -sum;
+            trace = new SymmetryIntervalTrace(model, t0, x0, true);
+            double[] back = new double[model.branches];
+            model.unshift(trace.endCurrentsA, back);
             value = new double[y.length];
             for (int i = 0; i < y.length; i++) {
                 value[i] = back[i] - y[i];
             }
             int n = y.length;
             jacobian = new double[n][n];
-            double[] column = new double[md.m];
-            double[] shifted = new double[md.m];
+            double[] column = new double[model.branches];
+            double[] shifted = new double[model.branches];
             for (int c = 0; c < n; c++) {
-                for (int k = 0; k < md.m; k++) {
-                    column[k] = sweep.endSensitivity[k][c];
+                for (int k = 0; k < model.branches; k++) {
+                    column[k] = trace.endSensitivity[k][c];
                 }
-                md.unshift(column, shifted);
+                model.unshift(column, shifted);
                 for (int i = 0; i < n; i++) {
                     jacobian[i][c] = shifted[i] - (i == c ? 1 : 0);
                 }

@@ -33,20 +33,20 @@ class BridgeNewtonTest {
                 circuit(false, 40, 50, 0.3, 0.01, 24, 0.8, 0.1, 0.05, 0.01),   // single-phase, continuous
                 circuit(false, 19, 50, 0.3, 0.002, 24, 0.8, 0, 0, 0)};         // single-phase, discontinuous
         for (BridgeCircuit c : circuits) {
-            BridgeModel md = new BridgeModel(c);
-            BridgeSweep periodic = BridgeSolver.periodic(md);
-            int n = md.m - 1;
-            double anchor = periodic.t0;
-            double[] y = java.util.Arrays.copyOf(periodic.stateAtAngle(md.w * anchor, md.w), n);
-            double[][] exact = BridgeNewton.exactJacobian(md, anchor, y);
-            double h = RELATIVE_STEP * md.currentScaleA();
+            BridgeModel model = new BridgeModel(c);
+            SymmetryIntervalTrace periodic = BridgeSolver.periodic(model);
+            int n = model.branches - 1;
+            double anchor = periodic.startTimeS;
+            double[] y = java.util.Arrays.copyOf(periodic.stateAtAngle(model.omega * anchor, model.omega), n);
+            double[][] exact = BridgeNewton.exactJacobian(model, anchor, y);
+            double h = RELATIVE_STEP * model.currentScaleA();
             for (int j = 0; j < n; j++) {
                 double[] plus = y.clone();
                 double[] minus = y.clone();
                 plus[j] += h;
                 minus[j] -= h;
-                double[] rPlus = new BridgeNewton.Residual(md, anchor, plus).value;
-                double[] rMinus = new BridgeNewton.Residual(md, anchor, minus).value;
+                double[] rPlus = new BridgeNewton.Residual(model, anchor, plus).value;
+                double[] rMinus = new BridgeNewton.Residual(model, anchor, minus).value;
                 for (int i = 0; i < n; i++) {
                     double difference = (rPlus[i] - rMinus[i]) / (2 * h);
                     int row = i;
@@ -59,24 +59,24 @@ class BridgeNewtonTest {
 
     @Test
     void in_discontinuous_conduction_the_map_forgets_its_start_so_the_jacobian_is_minus_the_identity() {
-        BridgeModel md = new BridgeModel(circuit(false, 19, 50, 0.3, 0.002, 24, 0.8, 0, 0, 0));
-        double[][] exact = BridgeNewton.exactJacobian(md, 0, new double[] {0.01});
+        BridgeModel model = new BridgeModel(circuit(false, 19, 50, 0.3, 0.002, 24, 0.8, 0, 0, 0));
+        double[][] exact = BridgeNewton.exactJacobian(model, 0, new double[] {0.01});
         assertEquals(-1, exact[0][0], 0.0);
     }
 
     @Test
     void newton_with_the_exact_jacobian_converges_from_the_fixed_point_guess_within_a_few_steps() {
-        BridgeModel md = new BridgeModel(circuit(true, 100, 50, 0.2, 0.002, 24, 0.8, 0.05, 0, 0));
-        BridgeSweep periodic = BridgeSolver.periodic(md);
-        double[] y = java.util.Arrays.copyOf(periodic.stateAtAngle(md.w * periodic.t0, md.w), 2);
+        BridgeModel model = new BridgeModel(circuit(true, 100, 50, 0.2, 0.002, 24, 0.8, 0.05, 0, 0));
+        SymmetryIntervalTrace periodic = BridgeSolver.periodic(model);
+        double[] y = java.util.Arrays.copyOf(periodic.stateAtAngle(model.omega * periodic.startTimeS, model.omega), 2);
         double[] start = {y[0] * 1.01, y[1] * 0.99};
-        double[] residual = new BridgeNewton.Residual(md, periodic.t0, start).value;
+        double[] residual = new BridgeNewton.Residual(model, periodic.startTimeS, start).value;
         double before = Math.max(Math.abs(residual[0]), Math.abs(residual[1]));
-        double[][] jac = BridgeNewton.exactJacobian(md, periodic.t0, start);
+        double[][] jac = BridgeNewton.exactJacobian(model, periodic.startTimeS, start);
         double det = jac[0][0] * jac[1][1] - jac[0][1] * jac[1][0];
         double[] next = {start[0] - (residual[0] * jac[1][1] - jac[0][1] * residual[1]) / det,
                 start[1] - (jac[0][0] * residual[1] - jac[1][0] * residual[0]) / det};
-        double[] after = new BridgeNewton.Residual(md, periodic.t0, next).value;
+        double[] after = new BridgeNewton.Residual(model, periodic.startTimeS, next).value;
         // quadratic convergence: a 1 % error leaves a residual of order 1e-4 of the first, a chord far more
         assertTrue(Math.max(Math.abs(after[0]), Math.abs(after[1])) < 1e-3 * before,
                 "one Newton step from 1 %: " + before + " -> " + java.util.Arrays.toString(after));

@@ -1,5 +1,10 @@
 package coilwright.load;
 
+import static coilwright.load.SwitchingEvent.CURRENT_ENDS;
+import static coilwright.load.SwitchingEvent.JOINS_LOWER_RAIL;
+import static coilwright.load.SwitchingEvent.JOINS_UPPER_RAIL;
+import static coilwright.load.SwitchingEvent.PAIR_STARTS;
+
 import org.apache.commons.math3.optim.MaxEval;
 import org.apache.commons.math3.optim.nonlinear.scalar.GoalType;
 import org.apache.commons.math3.optim.univariate.BrentOptimizer;
@@ -14,14 +19,15 @@ import java.util.List;
  * at diode events: a conducting diode's current reaching zero, or a blocked diode becoming forward-biased.
  * With no diode conducting the next start is known in closed form (the window where a line-to-line EMF exceeds
  * V0, see {@link BridgeModel#pairInWindow}). Otherwise events are bracketed by sampling the closed-form
- * waveforms every {@link #SAMPLE_RAD} of electrical angle and located with a Brent solver.
+ * waveforms every {@link #SAMPLE_RAD} of electrical angle and located by a safeguarded Newton iteration
+ * ({@link #root}). The trace is the map whose fixed point, after the symmetry, is the periodic state.
  * <p>
  * Each event function is evaluated as a sum of terms of size up to the sum of its coefficient magnitudes, so
  * its rounding noise is a fixed fraction of that sum. An event fires only when the function falls below minus
  * this noise level (a hysteresis): a branch that has just started from zero current, whose current rises from
  * a double root, cannot end again at the same instant on rounding noise.
  */
-final class BridgeSweep {
+final class SymmetryIntervalTrace {
     /** Sampling step for bracketing events, electrical radians (1.5 degrees). */
     static final double SAMPLE_RAD = Math.toRadians(1.5);
     /** Event-time accuracy, electrical radians. */
@@ -34,100 +40,96 @@ final class BridgeSweep {
     private static final int MAX_BRENT_EVALUATIONS = 200;
     private static final int MAX_ROOT_ITERATIONS = 200;
 
-    private static final int CURRENT = 0;
-    private static final int JOIN_UP = 1;
-    private static final int JOIN_DOWN = 2;
-    private static final int PAIR = 3;
 
     final List<BridgeSegment> segments = new ArrayList<>(8);
     final List<Double> durations = new ArrayList<>(8);
     /** The isolated pulse computed by series for each segment that is one, else null. */
     final List<BridgePulse> pulses = new ArrayList<>(8);
-    final double[] end;
-    final double t0;
+    final double[] endCurrentsA;
+    final double startTimeS;
     /**
      * Largest sum of coefficient magnitudes of a branch current over the segments, A: the rounding noise of every
-     * current in this sweep is a small multiple of 1e-16 of it (the terms of a waveform can cancel to far less).
+     * current in this trace is a small multiple of 1e-16 of it (the terms of a waveform can cancel to far less).
      */
     double coefficientMagnitudeA;
     /**
-     * Derivative of {@link #end} with respect to the first m - 1 start currents (m rows, m - 1 columns), exact for
+     * Derivative of {@link #endCurrentsA} with respect to the first m - 1 start currents (m rows, m - 1 columns), exact for
      * the piecewise-linear circuit: each segment's state transition, and at each event the saltation term
      * (the slope before minus the slope after, times the event time's gradient); null unless asked for.
      */
     final double[][] endSensitivity;
 
-    private final BridgeModel md;
-    private final double tolV;
-    private final double[][] fns;
-    private final int[] fnType;
-    private final int[] fnBranch;
-    private final double[] fnTol;
-    private final double[] prev;
-    private final double[][] slopes;
-    private final double[] slopeTol;
-    private final double[] prevSlope;
-    private final double[] bs = new double[BridgeSegment.NB];
-    private double evTau;
-    private int evType;
-    private int evK;
-    private int evJ;
-    private int evFunction;
+    private final BridgeModel model;
+    private final double biasToleranceV;
+    private final double[][] eventFunctionCoefficients;
+    private final SwitchingEvent[] eventKinds;
+    private final int[] eventBranches;
+    private final double[] eventNoise;
+    private final double[] previousValues;
+    private final double[][] eventSlopes;
+    private final double[] slopeNoise;
+    private final double[] previousSlopes;
+    private final double[] basisScratch = new double[BridgeSegment.NB];
+    private double eventTau;
+    private SwitchingEvent eventKind;
+    private int eventBranch;
+    private int eventPartner;
+    private int eventFunction;
     /** Set by a transition that sets every current to zero (the state no longer depends on the start). */
     private boolean stateReset;
 
-    BridgeSweep(BridgeModel md, double t0, double[] x0) {
-        this(md, t0, x0, false);
+    SymmetryIntervalTrace(BridgeModel model, double startTimeS, double[] x0) {
+        this(model, startTimeS, x0, false);
     }
 
     /**
-     * Traces the interval from state x0 at t0; with {@code sensitivity}, also the end state's derivative with
+     * Traces the interval from state x0 at startTimeS; with {@code sensitivity}, also the end state's derivative with
      * respect to the first m - 1 start currents (the last one is minus their sum), see {@link #endSensitivity}.
      */
-    BridgeSweep(BridgeModel md, double t0, double[] x0, boolean sensitivity) {
-        this.md = md;
-        this.t0 = t0;
-        this.tolV = 1e-12 * (md.emfPeakV + md.v0);
-        int nf = 2 * md.m;
-        fns = new double[nf][BridgeSegment.NB];
-        fnType = new int[nf];
-        fnBranch = new int[nf];
-        fnTol = new double[nf];
-        prev = new double[nf];
-        slopes = new double[nf][BridgeSegment.NB];
-        slopeTol = new double[nf];
-        prevSlope = new double[nf];
-        double tEnd = t0 + md.sweepS;
+    SymmetryIntervalTrace(BridgeModel model, double startTimeS, double[] x0, boolean sensitivity) {
+        this.model = model;
+        this.startTimeS = startTimeS;
+        this.biasToleranceV = 1e-12 * (model.emfPeakV + model.thresholdV);
+        int nf = 2 * model.branches;
+        eventFunctionCoefficients = new double[nf][BridgeSegment.NB];
+        eventKinds = new SwitchingEvent[nf];
+        eventBranches = new int[nf];
+        eventNoise = new double[nf];
+        previousValues = new double[nf];
+        eventSlopes = new double[nf][BridgeSegment.NB];
+        slopeNoise = new double[nf];
+        previousSlopes = new double[nf];
+        double tEnd = startTimeS + model.intervalS;
         double[] x = x0.clone();
-        int[] sign = new int[md.m];
+        int[] sign = new int[model.branches];
         int up = 0;
         int down = 0;
-        for (int k = 0; k < md.m; k++) {
+        for (int k = 0; k < model.branches; k++) {
             sign[k] = x[k] > 0 ? 1 : x[k] < 0 ? -1 : 0;
             up += sign[k] > 0 ? 1 : 0;
             down += sign[k] < 0 ? 1 : 0;
         }
-        double[][] sens = sensitivity ? initialSensitivity(md.m) : null;
-        double[][] next = sensitivity ? new double[md.m][md.m - 1] : null;
+        double[][] sens = sensitivity ? initialSensitivity(model.branches) : null;
+        double[][] next = sensitivity ? new double[model.branches][model.branches - 1] : null;
         if (up == 0 || down == 0) {
             java.util.Arrays.fill(sign, 0);
             java.util.Arrays.fill(x, 0);
             clear(sens);
         }
-        double t = t0;
+        double t = startTimeS;
         BridgeSegment seg = settle(sign, t, x);
-        double[] slopeBefore = new double[md.m];
-        double[] slopeAfter = new double[md.m];
-        double[] tauGradient = new double[md.m - 1];
+        double[] slopeBefore = new double[model.branches];
+        double[] slopeAfter = new double[model.branches];
+        double[] tauGradient = new double[model.branches - 1];
         for (int events = 0; ; events++) {
             if (events > MAX_EVENTS) {
                 throw new NoPeriodicSolution("more than " + MAX_EVENTS
-                        + " switching events in one interval (w = " + md.w + " rad/s, V0 = " + md.v0 + " V)");
+                        + " switching events in one interval (w = " + model.omega + " rad/s, V0 = " + model.thresholdV + " V)");
             }
             boolean found = seg.off() ? offEvent(t, tEnd - t) : findEvent(seg, tEnd - t);
             if (!found) {
                 add(seg, tEnd - t, null);
-                x = new double[md.m];
+                x = new double[model.branches];
                 seg.currentsAt(tEnd - t, x);
                 if (sens != null) {
                     seg.propagate(tEnd - t, sens, next);
@@ -135,27 +137,27 @@ final class BridgeSweep {
                 }
                 break;
             }
-            double tau = evTau;
+            double tau = eventTau;
             add(seg, tau, null);
             seg.currentsAt(tau, x);
             if (sens != null) {
                 seg.propagate(tau, sens, next);
-                if (evType != PAIR) {
+                if (eventKind != PAIR_STARTS) {
                     eventTimeGradient(seg, tau, next, tauGradient);
                     seg.currentSlopesAt(tau, slopeBefore);
                 }
             }
             t += tau;
             stateReset = false;
-            seg = transition(seg, evType, evK, evJ, t, x);
+            seg = transition(seg, eventKind, eventBranch, eventPartner, t, x);
             if (sens != null) {
-                if (evType == PAIR) {
+                if (eventKind == PAIR_STARTS) {
                     clear(next); // from rest at a window start fixed by the EMFs alone
                 } else {
                     // saltation: the state reaches the event with the old slope and the new segment starts when the
                     // event does; after a reset the start state is zero whatever the event time
                     seg.currentSlopesAt(0, slopeAfter);
-                    for (int k = 0; k < md.m; k++) {
+                    for (int k = 0; k < model.branches; k++) {
                         for (int c = 0; c < tauGradient.length; c++) {
                             next[k][c] = (stateReset ? 0 : next[k][c] + slopeBefore[k] * tauGradient[c])
                                     - slopeAfter[k] * tauGradient[c];
@@ -166,20 +168,20 @@ final class BridgeSweep {
                 sens = next;
                 next = swap;
             }
-            if (evType == PAIR && seg.conducting() == 2) {
-                BridgePulse pulse = BridgePulse.of(md, evK, evJ, (tEnd - t) * md.w);
+            if (eventKind == PAIR_STARTS && seg.conducting() == 2) {
+                BridgePulse pulse = BridgePulse.of(model, eventBranch, eventPartner, (tEnd - t) * model.omega);
                 if (pulse != null) {
-                    double d = pulse.lengthRad / md.w;
+                    double d = pulse.lengthRad / model.omega;
                     add(seg, d, pulse);
                     t += d;
                     java.util.Arrays.fill(x, 0);
-                    seg = settle(new int[md.m], t, x);
+                    seg = settle(new int[model.branches], t, x);
                     clear(sens);
                 }
             }
         }
         endSensitivity = sens;
-        end = x;
+        endCurrentsA = x;
     }
 
     /** The derivative of the start state x0 = (y, -sum y) with respect to y: the identity over minus ones. */
@@ -209,22 +211,22 @@ final class BridgeSweep {
      */
     private void eventTimeGradient(BridgeSegment seg, double tau, double[][] sens, double[] out) {
         java.util.Arrays.fill(out, 0);
-        double slope = value(seg, slopes[evFunction], tau, new double[BridgeSegment.NB]);
+        double slope = value(seg, eventSlopes[eventFunction], tau, new double[BridgeSegment.NB]);
         if (tau == 0 || !(slope < 0)) {
             return;
         }
-        int k = evK;
+        int k = eventBranch;
         for (int c = 0; c < out.length; c++) {
             double dF;
-            if (evType == CURRENT) {
+            if (eventKind == CURRENT_ENDS) {
                 dF = seg.sign[k] * sens[k][c];
             } else {
                 double dcCurrent = 0;
-                for (int i = 0; i < md.m; i++) {
+                for (int i = 0; i < model.branches; i++) {
                     dcCurrent += seg.sign[i] > 0 ? sens[i][c] : 0;
                 }
                 double upperShare = (double) seg.nDown / seg.conducting();
-                dF = md.rDc * (evType == JOIN_UP ? upperShare : 1 - upperShare) * dcCurrent;
+                dF = model.dcResistanceOhm * (eventKind == JOINS_UPPER_RAIL ? upperShare : 1 - upperShare) * dcCurrent;
             }
             out[c] = -dF / slope;
         }
@@ -233,12 +235,12 @@ final class BridgeSweep {
 
     /**
      * Branch currents at electrical angle theta = w t of this (periodic) solution, else null where only a pulse
-     * segment covers it. Angles outside the sweep are brought into it with the symmetry x(t + T_s) = S x(t).
+     * segment covers it. Angles outside the trace are brought into it with the symmetry x(t + T_s) = S x(t).
      */
     double[] stateAtAngle(double theta, double w) {
         double t = theta / w;
-        double span = md.sweepS;
-        int shifts = (int) Math.floor((t - t0) / span);
+        double span = model.intervalS;
+        int shifts = (int) Math.floor((t - startTimeS) / span);
         t -= shifts * span;
         double[] x = null;
         for (int i = 0; i < segments.size() && x == null; i++) {
@@ -248,21 +250,21 @@ final class BridgeSweep {
                 if (pulses.get(i) != null) {
                     return null;
                 }
-                x = new double[md.m];
+                x = new double[model.branches];
                 s.currentsAt(tau, x);
             }
         }
         if (x == null) {
             return null;
         }
-        double[] tmp = new double[md.m];
+        double[] tmp = new double[model.branches];
         for (; shifts > 0; shifts--) {
-            md.shift(x, tmp);
-            System.arraycopy(tmp, 0, x, 0, md.m);
+            model.shift(x, tmp);
+            System.arraycopy(tmp, 0, x, 0, model.branches);
         }
         for (; shifts < 0; shifts++) {
-            md.unshift(x, tmp);
-            System.arraycopy(tmp, 0, x, 0, md.m);
+            model.unshift(x, tmp);
+            System.arraycopy(tmp, 0, x, 0, model.branches);
         }
         return x;
     }
@@ -280,10 +282,10 @@ final class BridgeSweep {
         pulses.add(pulse);
     }
 
-    private BridgeSegment transition(BridgeSegment seg, int type, int k, int j, double t, double[] x) {
+    private BridgeSegment transition(BridgeSegment seg, SwitchingEvent type, int k, int j, double t, double[] x) {
         int[] sign = seg.sign.clone();
         switch (type) {
-            case CURRENT -> {
+            case CURRENT_ENDS -> {
                 sign[k] = 0;
                 x[k] = 0;
                 int up = 0;
@@ -298,8 +300,8 @@ final class BridgeSweep {
                     stateReset = true;
                 }
             }
-            case JOIN_UP -> sign[k] = 1;
-            case JOIN_DOWN -> sign[k] = -1;
+            case JOINS_UPPER_RAIL -> sign[k] = 1;
+            case JOINS_LOWER_RAIL -> sign[k] = -1;
             default -> {
                 java.util.Arrays.fill(x, 0);
                 java.util.Arrays.fill(sign, 0);
@@ -313,30 +315,30 @@ final class BridgeSweep {
     /** Adds every blocked branch that is already forward-biased (most biased first). */
     private BridgeSegment settle(int[] sign, double t, double[] x) {
         for (int pass = 0; ; pass++) {
-            BridgeSegment seg = new BridgeSegment(md, sign, t, x);
-            if (pass > md.m) {
+            BridgeSegment seg = new BridgeSegment(model, sign, t, x);
+            if (pass > model.branches) {
                 return seg;
             }
             if (seg.off()) {
-                int p = md.pairInWindow(t);
+                int p = model.pairInWindow(t);
                 if (p < 0) {
                     return seg;
                 }
-                sign[md.pairK[p]] = 1;
-                sign[md.pairJ[p]] = -1;
+                sign[model.pairUpper[p]] = 1;
+                sign[model.pairLower[p]] = -1;
                 java.util.Arrays.fill(x, 0);
                 stateReset = true;
                 continue;
             }
-            double worst = -tolV;
+            double worst = -biasToleranceV;
             int worstK = -1;
             int worstSign = 0;
-            seg.basis(0, bs);
-            double uUp = BridgeSegment.dot(seg.uUp, bs);
-            double uDown = BridgeSegment.dot(seg.uDown, bs);
-            for (int k = 0; k < md.m; k++) {
+            seg.basis(0, basisScratch);
+            double uUp = BridgeSegment.dot(seg.uUp, basisScratch);
+            double uDown = BridgeSegment.dot(seg.uDown, basisScratch);
+            for (int k = 0; k < model.branches; k++) {
                 if (sign[k] == 0) {
-                    double e = md.emf(k, t);
+                    double e = model.emf(k, t);
                     if (uUp - e < worst) {
                         worst = uUp - e;
                         worstK = k;
@@ -361,8 +363,8 @@ final class BridgeSweep {
     private boolean offEvent(double t, double remaining) {
         double best = Double.POSITIVE_INFINITY;
         int bestP = -1;
-        for (int p = 0; p < md.pairK.length; p++) {
-            double tau = md.timeToWindow(p, t);
+        for (int p = 0; p < model.pairUpper.length; p++) {
+            double tau = model.timeToWindow(p, t);
             if (tau < best) {
                 best = tau;
                 bestP = p;
@@ -371,15 +373,15 @@ final class BridgeSweep {
         if (bestP < 0 || best > remaining) {
             return false;
         }
-        evTau = best;
-        evType = PAIR;
-        evK = md.pairK[bestP];
-        evJ = md.pairJ[bestP];
+        eventTau = best;
+        eventKind = PAIR_STARTS;
+        eventBranch = model.pairUpper[bestP];
+        eventPartner = model.pairLower[bestP];
         return true;
     }
 
     /**
-     * Finds the first event of a conducting segment within (0, remaining]; sets evTau, evType, evK, evJ.
+     * Finds the first event of a conducting segment within (0, remaining]; sets eventTau, eventKind, eventBranch, eventPartner.
      * <p>
      * Sampling alone misses an event function that dips below zero and recovers between two samples (a diode
      * current touching zero near the instant its pair's window opens): both samples are positive. So each step
@@ -391,22 +393,22 @@ final class BridgeSweep {
      */
     private boolean findEvent(BridgeSegment seg, double remaining) {
         int nf = eventFunctions(seg);
-        seg.basis(0, bs);
+        seg.basis(0, basisScratch);
         for (int f = 0; f < nf; f++) {
-            prev[f] = BridgeSegment.dot(fns[f], bs);
-            prevSlope[f] = BridgeSegment.dot(slopes[f], bs);
-            if (prev[f] < -fnTol[f]) {
+            previousValues[f] = BridgeSegment.dot(eventFunctionCoefficients[f], basisScratch);
+            previousSlopes[f] = BridgeSegment.dot(eventSlopes[f], basisScratch);
+            if (previousValues[f] < -eventNoise[f]) {
                 return fire(0, f);
             }
         }
-        double fullStep = SAMPLE_RAD / md.w;
+        double fullStep = SAMPLE_RAD / model.omega;
         double step = Math.min(fullStep, FAST_STEP_TIME_CONSTANTS / -seg.lambda2);
         // the basis is advanced by recurrence between full steps (exact re-evaluation before any decision)
         double cStep = Math.cos(SAMPLE_RAD);
         double sStep = Math.sin(SAMPLE_RAD);
         double e1Step = Math.exp(seg.lambda1 * fullStep);
         double e2Step = Math.exp(seg.lambda2 * fullStep);
-        double[] rb = bs.clone();
+        double[] rb = basisScratch.clone();
         double lo = 0;
         while (lo < remaining) {
             double hi = lo + step;
@@ -429,26 +431,26 @@ final class BridgeSweep {
             double best = Double.POSITIVE_INFINITY;
             int bestF = -1;
             for (int f = 0; f < nf; f++) {
-                double v = BridgeSegment.dot(fns[f], rb);
-                if (!exact && v < -fnTol[f]) {
+                double v = BridgeSegment.dot(eventFunctionCoefficients[f], rb);
+                if (!exact && v < -eventNoise[f]) {
                     seg.basis(hi, rb);
                     exact = true;
-                    v = BridgeSegment.dot(fns[f], rb);
+                    v = BridgeSegment.dot(eventFunctionCoefficients[f], rb);
                 }
-                double slope = BridgeSegment.dot(slopes[f], rb);
+                double slope = BridgeSegment.dot(eventSlopes[f], rb);
                 double root = Double.NaN;
-                if (v < -fnTol[f]) {
+                if (v < -eventNoise[f]) {
                     root = locate(seg, f, lo, hi);
-                } else if (prevSlope[f] < -slopeTol[f] && slope > slopeTol[f]
-                        && Math.min(prev[f], v) - curvatureBound(seg, f, e1Lo, e2Lo) * h * h / 8 < -fnTol[f]) {
+                } else if (previousSlopes[f] < -slopeNoise[f] && slope > slopeNoise[f]
+                        && Math.min(previousValues[f], v) - curvatureBound(seg, f, e1Lo, e2Lo) * h * h / 8 < -eventNoise[f]) {
                     root = dip(seg, f, lo, hi);
                 }
                 if (root < best) {
                     best = root;
                     bestF = f;
                 }
-                prev[f] = v;
-                prevSlope[f] = slope;
+                previousValues[f] = v;
+                previousSlopes[f] = slope;
             }
             if (bestF >= 0) {
                 return fire(best, bestF);
@@ -468,8 +470,8 @@ final class BridgeSweep {
      * exponential modes decay, so their share is largest at the start of the step).
      */
     private double curvatureBound(BridgeSegment seg, int f, double e1Lo, double e2Lo) {
-        double[] c = fns[f];
-        double w = md.w;
+        double[] c = eventFunctionCoefficients[f];
+        double w = model.omega;
         return w * w * (Math.abs(c[0]) + Math.abs(c[1])) + seg.lambda1 * seg.lambda1 * Math.abs(c[3] * e1Lo)
                 + seg.lambda2 * seg.lambda2 * Math.abs(c[4] * e2Lo);
     }
@@ -481,27 +483,27 @@ final class BridgeSweep {
      */
     private double dip(BridgeSegment seg, int f, double lo, double hi) {
         double[] b = new double[BridgeSegment.NB];
-        double[] sl = slopes[f];
+        double[] sl = eventSlopes[f];
         // decided again on exact values (the samples may come from the recurrence)
-        if (value(seg, fns[f], hi, b) < -fnTol[f]) {
+        if (value(seg, eventFunctionCoefficients[f], hi, b) < -eventNoise[f]) {
             return locate(seg, f, lo, hi);
         }
         if (!(value(seg, sl, lo, b) < 0 && value(seg, sl, hi, b) > 0)) {
             return Double.NaN;
         }
         double tauMin = root(seg, sl, 0, lo, hi, b);
-        if (value(seg, fns[f], tauMin, b) >= -fnTol[f]) {
+        if (value(seg, eventFunctionCoefficients[f], tauMin, b) >= -eventNoise[f]) {
             return Double.NaN;
         }
         return locate(seg, f, lo, tauMin);
     }
 
     private boolean fire(double tau, int f) {
-        evTau = tau;
-        evType = fnType[f];
-        evK = fnBranch[f];
-        evFunction = f;
-        evJ = -1;
+        eventTau = tau;
+        eventKind = eventKinds[f];
+        eventBranch = eventBranches[f];
+        eventFunction = f;
+        eventPartner = -1;
         return true;
     }
 
@@ -512,14 +514,14 @@ final class BridgeSweep {
      * where the function leaves the band downwards.
      */
     private double locate(BridgeSegment seg, int f, double lo, double hi) {
-        double[] fn = fns[f];
-        double tol = fnTol[f];
+        double[] fn = eventFunctionCoefficients[f];
+        double tol = eventNoise[f];
         double[] b = new double[BridgeSegment.NB];
         double flo = value(seg, fn, lo, b);
         if (flo > tol) {
             return root(seg, fn, 0, lo, hi, b);
         }
-        double peakTau = new BrentOptimizer(1e-10, EVENT_ACCURACY_RAD / md.w).optimize(new MaxEval(MAX_BRENT_EVALUATIONS),
+        double peakTau = new BrentOptimizer(1e-10, EVENT_ACCURACY_RAD / model.omega).optimize(new MaxEval(MAX_BRENT_EVALUATIONS),
                 new UnivariateObjectiveFunction(tau -> value(seg, fn, tau, b)), GoalType.MAXIMIZE,
                 new SearchInterval(lo, hi)).getPoint();
         if (value(seg, fn, peakTau, b) > tol) {
@@ -552,8 +554,8 @@ final class BridgeSweep {
         if (fLo > 0 == fHi > 0) {
             throw new NoPeriodicSolution("an event function has the same sign at both ends of its bracket");
         }
-        double[] slope = {md.w * fn[1], -md.w * fn[0], 0, seg.lambda1 * fn[3], seg.lambda2 * fn[4]};
-        double absolute = EVENT_ACCURACY_RAD / md.w;
+        double[] slope = {model.omega * fn[1], -model.omega * fn[0], 0, seg.lambda1 * fn[3], seg.lambda2 * fn[4]};
+        double absolute = EVENT_ACCURACY_RAD / model.omega;
         // below: where fn + shift is negative; above: where it is positive
         double below = fLo < 0 ? lo : hi;
         double above = fLo < 0 ? hi : lo;
@@ -597,32 +599,32 @@ final class BridgeSweep {
     /** Fills the event functions of a conducting segment, each >= 0 while the state is valid; returns their count. */
     private int eventFunctions(BridgeSegment seg) {
         int nf = 0;
-        for (int k = 0; k < md.m; k++) {
+        for (int k = 0; k < model.branches; k++) {
             if (seg.sign[k] != 0) {
                 for (int i = 0; i < BridgeSegment.NB; i++) {
-                    fns[nf][i] = seg.current[k][i] * seg.sign[k];
+                    eventFunctionCoefficients[nf][i] = seg.current[k][i] * seg.sign[k];
                 }
-                tag(seg, nf++, CURRENT, k);
+                tag(seg, nf++, CURRENT_ENDS, k);
             } else {
                 for (int i = 0; i < BridgeSegment.NB; i++) {
-                    double e = i == 0 ? md.a[k] : i == 1 ? md.b[k] : 0;
-                    fns[nf][i] = seg.uUp[i] - e;
-                    fns[nf + 1][i] = e - seg.uDown[i];
+                    double e = i == 0 ? model.emfCosV[k] : i == 1 ? model.emfSinV[k] : 0;
+                    eventFunctionCoefficients[nf][i] = seg.uUp[i] - e;
+                    eventFunctionCoefficients[nf + 1][i] = e - seg.uDown[i];
                 }
-                tag(seg, nf++, JOIN_UP, k);
-                tag(seg, nf++, JOIN_DOWN, k);
+                tag(seg, nf++, JOINS_UPPER_RAIL, k);
+                tag(seg, nf++, JOINS_LOWER_RAIL, k);
             }
         }
         return nf;
     }
 
-    private void tag(BridgeSegment seg, int f, int type, int k) {
-        fnType[f] = type;
-        fnBranch[f] = k;
-        double[] c = fns[f];
-        double[] d = slopes[f];
-        d[0] = md.w * c[1];
-        d[1] = -md.w * c[0];
+    private void tag(BridgeSegment seg, int f, SwitchingEvent type, int k) {
+        eventKinds[f] = type;
+        eventBranches[f] = k;
+        double[] c = eventFunctionCoefficients[f];
+        double[] d = eventSlopes[f];
+        d[0] = model.omega * c[1];
+        d[1] = -model.omega * c[0];
         d[2] = 0;
         d[3] = seg.lambda1 * c[3];
         d[4] = seg.lambda2 * c[4];
@@ -632,7 +634,7 @@ final class BridgeSweep {
             sum += Math.abs(c[i]);
             slopeSum += Math.abs(d[i]);
         }
-        fnTol[f] = NOISE * sum;
-        slopeTol[f] = NOISE * slopeSum;
+        eventNoise[f] = NOISE * sum;
+        slopeNoise[f] = NOISE * slopeSum;
     }
 }
