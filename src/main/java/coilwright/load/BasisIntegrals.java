@@ -21,7 +21,7 @@ final class BasisIntegrals {
     final double[][] gram = new double[BridgeSegment.NB][BridgeSegment.NB];
 
     BasisIntegrals(BridgeSegment s, double d) {
-        double w = s.md.w;
+        double w = s.model.omega;
         double th0 = w * s.t0;
         double th1 = w * (s.t0 + d);
         double l1 = s.lambda1;

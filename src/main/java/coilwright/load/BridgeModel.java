@@ -8,30 +8,36 @@ package coilwright.load;
  * upper and one lower diode, and the diodes on one rail share their rail's potential).
  */
 final class BridgeModel {
-    final int m;
-    final double w;
-    final double[] a;
-    final double[] b;
+    /** Number of branches m: 3 (three-phase) or 2 (single-phase). */
+    final int branches;
+    /** Electrical angular frequency w, rad/s. */
+    final double omega;
+    /** Branch EMF e_k(t) = emfCosV[k] cos(wt) + emfSinV[k] sin(wt), V. */
+    final double[] emfCosV;
+    final double[] emfSinV;
     /** Branch resistance (winding part + cable part), Ohm. */
-    final double r;
-    final double rWinding;
-    final double rCable;
-    final double l;
-    final double v0;
-    final double rDc;
+    final double resistanceOhm;
+    final double windingResistanceOhm;
+    final double cableResistanceOhm;
+    /** Branch inductance L, H. */
+    final double inductanceH;
+    /** Battery voltage plus two diode drops, V0, V. */
+    final double thresholdV;
+    /** DC-side resistance (cable and battery), Ohm. */
+    final double dcResistanceOhm;
     final double emfPeakV;
     /** Amplitude of every pair EMF e_k - e_j (line-to-line for three-phase, the winding EMF for single-phase), V. */
     final double emfPeakPairV;
     /** Length of the symmetry interval: T/6 (three-phase) or T/2 (single-phase), s. */
-    final double sweepS;
+    final double intervalS;
     /**
-     * Ordered branch pairs (k up, j down) that can start conducting from the all-off state: pairK[p], pairJ[p],
-     * the phase pairPhi[p] of e_k - e_j = A cos(wt - phi) and the half-width theta of the window where
+     * Ordered branch pairs (k up, j down) that can start conducting from the all-off state: pairUpper[p], pairLower[p],
+     * the phase pairPhaseRad[p] of e_k - e_j = A cos(wt - phi) and the half-width theta of the window where
      * e_k - e_j exceeds V0 (the same for every pair). Empty when theta is below {@link #MIN_WINDOW_RAD}.
      */
-    final int[] pairK;
-    final int[] pairJ;
-    final double[] pairPhi;
+    final int[] pairUpper;
+    final int[] pairLower;
+    final double[] pairPhaseRad;
     final double windowHalfRad;
 
     /**
@@ -42,48 +48,48 @@ final class BridgeModel {
     static final double MIN_WINDOW_RAD = 1e-3;
 
     BridgeModel(BridgeCircuit c) {
-        w = 2 * Math.PI * c.frequencyHz();
+        omega = 2 * Math.PI * c.frequencyHz();
         double peak = Math.sqrt(2) * c.emfPhaseRmsV();
-        v0 = c.thresholdV();
-        rDc = c.dcResistanceOhm();
+        thresholdV = c.thresholdV();
+        dcResistanceOhm = c.dcResistanceOhm();
         if (c.type() == BridgeType.THREE_PHASE_BRIDGE) {
-            m = 3;
-            a = new double[3];
-            b = new double[3];
+            branches = 3;
+            emfCosV = new double[3];
+            emfSinV = new double[3];
             for (int k = 0; k < 3; k++) {
                 double phi = 2 * Math.PI * k / 3;
-                a[k] = -peak * Math.sin(phi);
-                b[k] = peak * Math.cos(phi);
+                emfCosV[k] = -peak * Math.sin(phi);
+                emfSinV[k] = peak * Math.cos(phi);
             }
-            rWinding = c.windingResistanceOhm();
-            rCable = c.acCableResistanceOhm();
-            l = c.inductanceH();
-            sweepS = Math.PI / (3 * w);
+            windingResistanceOhm = c.windingResistanceOhm();
+            cableResistanceOhm = c.acCableResistanceOhm();
+            inductanceH = c.inductanceH();
+            intervalS = Math.PI / (3 * omega);
             emfPeakV = peak;
         } else {
-            m = 2;
-            a = new double[] {0, 0};
-            b = new double[] {peak / 2, -peak / 2};
-            rWinding = c.windingResistanceOhm() / 2;
-            rCable = c.acCableResistanceOhm();
-            l = c.inductanceH() / 2;
-            sweepS = Math.PI / w;
+            branches = 2;
+            emfCosV = new double[] {0, 0};
+            emfSinV = new double[] {peak / 2, -peak / 2};
+            windingResistanceOhm = c.windingResistanceOhm() / 2;
+            cableResistanceOhm = c.acCableResistanceOhm();
+            inductanceH = c.inductanceH() / 2;
+            intervalS = Math.PI / omega;
             emfPeakV = peak / 2;
         }
-        r = rWinding + rCable;
+        resistanceOhm = windingResistanceOhm + cableResistanceOhm;
         emfPeakPairV = c.peakDrivingEmfV();
-        windowHalfRad = windowHalfRad(emfPeakPairV, v0);
-        int pairs = windowHalfRad >= MIN_WINDOW_RAD ? m * (m - 1) : 0;
-        pairK = new int[pairs];
-        pairJ = new int[pairs];
-        pairPhi = new double[pairs];
+        windowHalfRad = windowHalfRad(emfPeakPairV, thresholdV);
+        int pairs = windowHalfRad >= MIN_WINDOW_RAD ? branches * (branches - 1) : 0;
+        pairUpper = new int[pairs];
+        pairLower = new int[pairs];
+        pairPhaseRad = new double[pairs];
         int p = 0;
-        for (int k = 0; k < m && pairs > 0; k++) {
-            for (int j = 0; j < m; j++) {
+        for (int k = 0; k < branches && pairs > 0; k++) {
+            for (int j = 0; j < branches; j++) {
                 if (j != k) {
-                    pairK[p] = k;
-                    pairJ[p] = j;
-                    pairPhi[p++] = Math.atan2(b[k] - b[j], a[k] - a[j]);
+                    pairUpper[p] = k;
+                    pairLower[p] = j;
+                    pairPhaseRad[p++] = Math.atan2(emfSinV[k] - emfSinV[j], emfCosV[k] - emfCosV[j]);
                 }
             }
         }
@@ -93,13 +99,13 @@ final class BridgeModel {
      * Half-width of the interval around the peak where A cos(psi) exceeds v0, radians: acos(v0 / A), written as
      * 2 asin(sqrt((A - v0) / 2A)) so that it stays accurate when A barely exceeds v0; 0 when A <= v0.
      */
-    static double windowHalfRad(double peakV, double v0) {
-        return peakV > v0 ? 2 * Math.asin(Math.sqrt((peakV - v0) / (2 * peakV))) : 0;
+    static double windowHalfRad(double peakV, double thresholdV) {
+        return peakV > thresholdV ? 2 * Math.asin(Math.sqrt((peakV - thresholdV) / (2 * peakV))) : 0;
     }
 
     /** True when a pair can conduct at all (its window is at least {@link #MIN_WINDOW_RAD} wide on each side). */
     boolean conducts() {
-        return pairK.length > 0;
+        return pairUpper.length > 0;
     }
 
     /**
@@ -109,8 +115,8 @@ final class BridgeModel {
     int pairInWindow(double t) {
         int best = -1;
         double bestCos = -2;
-        for (int p = 0; p < pairK.length; p++) {
-            double psi = Math.IEEEremainder(w * t - pairPhi[p], 2 * Math.PI);
+        for (int p = 0; p < pairUpper.length; p++) {
+            double psi = Math.IEEEremainder(omega * t - pairPhaseRad[p], 2 * Math.PI);
             if (psi >= -windowHalfRad - ANGLE_TOL_RAD && psi <= windowHalfRad - MIN_WINDOW_RAD / 2
                     && Math.cos(psi) > bestCos) {
                 best = p;
@@ -122,12 +128,12 @@ final class BridgeModel {
 
     /** Time from t to the next window start of pair p, s (0 when a window starts at t). */
     double timeToWindow(int p, double t) {
-        double psi = Math.IEEEremainder(w * t - pairPhi[p], 2 * Math.PI);
+        double psi = Math.IEEEremainder(omega * t - pairPhaseRad[p], 2 * Math.PI);
         double ahead = -windowHalfRad - psi;
         if (ahead < -ANGLE_TOL_RAD) {
             ahead += 2 * Math.PI;
         }
-        return Math.max(ahead, 0) / w;
+        return Math.max(ahead, 0) / omega;
     }
 
     /** Angle tolerance for window tests, radians (rounding of w t). */
@@ -135,12 +141,12 @@ final class BridgeModel {
 
     /** Branch EMF at time t, V. */
     double emf(int k, double t) {
-        return a[k] * Math.cos(w * t) + b[k] * Math.sin(w * t);
+        return emfCosV[k] * Math.cos(omega * t) + emfSinV[k] * Math.sin(omega * t);
     }
 
     /** Start-of-next-interval state from the end state: the symmetry map's inverse (x0 = P^-1 x_end). */
     void unshift(double[] end, double[] out) {
-        if (m == 3) {
+        if (branches == 3) {
             out[0] = -end[2];
             out[1] = -end[0];
             out[2] = -end[1];
@@ -150,9 +156,9 @@ final class BridgeModel {
         }
     }
 
-    /** The symmetry map itself: the state one interval later, x(t + sweepS) = S x(t) (inverse of unshift). */
+    /** The symmetry map itself: the state one interval later, x(t + intervalS) = S x(t) (inverse of unshift). */
     void shift(double[] x, double[] out) {
-        if (m == 3) {
+        if (branches == 3) {
             out[0] = -x[1];
             out[1] = -x[2];
             out[2] = -x[0];
@@ -164,6 +170,6 @@ final class BridgeModel {
 
     /** Scale of currents: the short-circuit branch current amplitude, A. */
     double currentScaleA() {
-        return emfPeakV / Math.hypot(r, w * l);
+        return emfPeakV / Math.hypot(resistanceOhm, omega * inductanceH);
     }
 }

@@ -2,9 +2,10 @@ package coilwright.load;
 
 /**
  * Newton's method on the periodic residual of the bridge (Map(x0) unshifted minus x0, on the independent branch
- * currents at anchor time ta), with a forward-difference Jacobian kept as a chord while it converges fast and
- * updated by Broyden's formula; {@link #damped} recomputes it at every step and searches the line further (the
- * fallback). Convergence is tested against the state's size and against the rounding noise of the sweep's
+ * currents at anchor time anchorS, s), with the exact Jacobian that every residual's trace carries (the state transition of
+ * each linear segment and the saltation at each event, see {@link SymmetryIntervalTrace#endSensitivity}); a forward-difference
+ * Jacobian only where that is not finite (an event met tangentially). {@link #damped} searches the line further (the
+ * fallback). Convergence is tested against the state's size and against the rounding noise of the trace's
  * waveforms. See {@link BridgeSolver} for the method and the fallbacks around it.
  */
 final class BridgeNewton {
@@ -13,37 +14,33 @@ final class BridgeNewton {
     private static final double NEWTON_TOLERANCE = 1e-13;
     private static final double ACCEPT_TOLERANCE = 1e-9;
 
-    private final BridgeModel md;
-    private final double ta;
-    private final double[] y0;
-    double[][] jac;
-    /** Fresh Jacobian at every step and a longer line search (the fallback). */
+    private final BridgeModel model;
+    private final double anchorS;
+    private final double[] startCurrentsA;
+    /** A longer line search and more steps (the fallback). */
     boolean damped;
 
-    BridgeNewton(BridgeModel md, double ta, double[] y0, double[][] jac) {
-        this.md = md;
-        this.ta = ta;
-        this.y0 = y0;
-        this.jac = jac;
+    BridgeNewton(BridgeModel model, double anchorS, double[] startCurrentsA) {
+        this.model = model;
+        this.anchorS = anchorS;
+        this.startCurrentsA = startCurrentsA;
     }
 
-    BridgeSweep solve() {
-        int n = md.m - 1;
-        double[] y = y0;
-        double scale = md.currentScaleA();
-        Residual r = new Residual(md, ta, y);
+    SymmetryIntervalTrace solve() {
+        int n = model.branches - 1;
+        double[] y = startCurrentsA;
+        double scale = model.currentScaleA();
+        Residual r = new Residual(model, anchorS, y);
         int maxSteps = damped ? MAX_DAMPED_NEWTON : MAX_NEWTON;
         double minLambda = damped ? 1e-6 : 1e-3;
         for (int it = 0; it < maxSteps; it++) {
             double size = Math.max(norm(y), 1e-3 * scale);
-            double noise = BridgeSolver.NOISE_TOLERANCE * r.sweep.coefficientMagnitudeA;
+            double noise = BridgeSolver.NOISE_TOLERANCE * r.trace.coefficientMagnitudeA;
             if (norm(r.value) <= Math.max(NEWTON_TOLERANCE * size, noise)
                     || it >= maxSteps / 2 && norm(r.value) <= Math.max(ACCEPT_TOLERANCE * size, noise)) {
-                return r.sweep;
+                return r.trace;
             }
-            if (jac == null || damped) {
-                jac = jacobian(md, ta, y, r, size);
-            }
+            double[][] jac = finite(r.jacobian) ? r.jacobian : finiteDifferenceJacobian(model, anchorS, y, r.value, size);
             double[] step = solveSmall(jac, r.value);
             if (!finite(step)) {
                 throw new NoPeriodicSolution("singular Newton matrix (residual " + norm(r.value) + " A)");
@@ -54,7 +51,7 @@ final class BridgeNewton {
                 for (int i = 0; i < n; i++) {
                     yt[i] -= lambda * step[i];
                 }
-                Residual trial = new Residual(md, ta, yt);
+                Residual trial = new Residual(model, anchorS, yt);
                 if (norm(trial.value) < norm(r.value)) {
                     next = trial;
                     break;
@@ -62,16 +59,11 @@ final class BridgeNewton {
             }
             if (next == null) {
                 if (norm(r.value) <= Math.max(ACCEPT_TOLERANCE * size, noise)) {
-                    return r.sweep;
+                    return r.trace;
                 }
-                double[] fp = new double[md.m];
-                md.unshift(r.sweep.end, fp);
-                next = new Residual(md, ta, java.util.Arrays.copyOf(fp, n));
-            }
-            if (norm(next.value) > 0.1 * norm(r.value)) {
-                jac = null;
-            } else if (jac != null && next.y != null) {
-                broyden(jac, y, r.value, next.y, next.value);
+                double[] fp = new double[model.branches];
+                model.unshift(r.trace.endCurrentsA, fp);
+                next = new Residual(model, anchorS, java.util.Arrays.copyOf(fp, n));
             }
             r = next;
             y = next.y;
@@ -80,70 +72,63 @@ final class BridgeNewton {
                 + " Newton steps (residual " + norm(r.value) + " A)");
     }
 
-    /**
-     * Broyden's rank-one update of the Jacobian after the step y0 -> y1 with residuals r0 -> r1 (Broyden, "A class
-     * of methods for solving nonlinear simultaneous equations", Math. Comp. 19, 1965): the chord becomes secant.
-     */
-    private static void broyden(double[][] jac, double[] y0, double[] r0, double[] y1, double[] r1) {
-        int n = y0.length;
-        double ss = 0;
-        double[] s = new double[n];
-        for (int i = 0; i < n; i++) {
-            s[i] = y1[i] - y0[i];
-            ss += s[i] * s[i];
-        }
-        if (!(ss > 0)) {
-            return;
-        }
-        for (int i = 0; i < n; i++) {
-            double js = 0;
-            for (int j = 0; j < n; j++) {
-                js += jac[i][j] * s[j];
-            }
-            double u = (r1[i] - r0[i] - js) / ss;
-            for (int j = 0; j < n; j++) {
-                jac[i][j] += u * s[j];
-            }
-        }
+    /** The exact Jacobian of the residual at y (anchor time anchorS). */
+    static double[][] exactJacobian(BridgeModel model, double anchorS, double[] y) {
+        return new Residual(model, anchorS, y).jacobian;
     }
 
-    /** Forward-difference Jacobian of the residual (reused while it keeps converging fast: a chord method). */
-    private static double[][] jacobian(BridgeModel md, double ta, double[] y, Residual r, double size) {
+    /** Forward-difference Jacobian of the residual r at y, steps of 1e-7 of {@code size}. */
+    static double[][] finiteDifferenceJacobian(BridgeModel model, double anchorS, double[] y, double[] r, double size) {
         int n = y.length;
         double[][] jac = new double[n][n];
         for (int j = 0; j < n; j++) {
             double[] yj = y.clone();
             double h = 1e-7 * size;
             yj[j] += h;
-            Residual rj = new Residual(md, ta, yj);
+            Residual rj = new Residual(model, anchorS, yj);
             for (int i = 0; i < n; i++) {
-                jac[i][j] = (rj.value[i] - r.value[i]) / h;
+                jac[i][j] = (rj.value[i] - r[i]) / h;
             }
         }
         return jac;
     }
 
-    /** Map(x0) unshifted minus x0, on the independent branch currents. */
-    private static final class Residual {
+    /** Map(x0) unshifted minus x0, on the independent branch currents, and its exact Jacobian. */
+    static final class Residual {
         final double[] y;
         final double[] value;
-        final BridgeSweep sweep;
+        /** d value / d y, from the trace's exact sensitivity. */
+        final double[][] jacobian;
+        final SymmetryIntervalTrace trace;
 
-        Residual(BridgeModel md, double t0, double[] y) {
+        Residual(BridgeModel model, double t0, double[] y) {
             this.y = y;
-            double[] x0 = new double[md.m];
+            double[] x0 = new double[model.branches];
             double sum = 0;
             for (int i = 0; i < y.length; i++) {
                 x0[i] = y[i];
                 sum += y[i];
             }
-            x0[md.m - 1] = -sum;
-            sweep = new BridgeSweep(md, t0, x0);
-            double[] back = new double[md.m];
-            md.unshift(sweep.end, back);
+            x0[model.branches - 1] = -sum;
+            trace = new SymmetryIntervalTrace(model, t0, x0, true);
+            double[] back = new double[model.branches];
+            model.unshift(trace.endCurrentsA, back);
             value = new double[y.length];
             for (int i = 0; i < y.length; i++) {
                 value[i] = back[i] - y[i];
+            }
+            int n = y.length;
+            jacobian = new double[n][n];
+            double[] column = new double[model.branches];
+            double[] shifted = new double[model.branches];
+            for (int c = 0; c < n; c++) {
+                for (int k = 0; k < model.branches; k++) {
+                    column[k] = trace.endSensitivity[k][c];
+                }
+                model.unshift(column, shifted);
+                for (int i = 0; i < n; i++) {
+                    jacobian[i][c] = shifted[i] - (i == c ? 1 : 0);
+                }
             }
         }
     }
@@ -154,6 +139,15 @@ final class BridgeNewton {
         }
         double det = a[0][0] * a[1][1] - a[0][1] * a[1][0];
         return new double[] {(b[0] * a[1][1] - a[0][1] * b[1]) / det, (a[0][0] * b[1] - a[1][0] * b[0]) / det};
+    }
+
+    private static boolean finite(double[][] a) {
+        for (double[] row : a) {
+            if (!finite(row)) {
+                return false;
+            }
+        }
+        return true;
     }
 
     private static boolean finite(double[] v) {

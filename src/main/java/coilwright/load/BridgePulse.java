@@ -34,8 +34,9 @@ final class BridgePulse {
     private static final double COEFFICIENT_LIMIT = 1e250;
     private static final GaussIntegrator UNIT = new GaussIntegratorFactory().legendre(24, 0, 1);
 
-    final int k;
-    final int j;
+    /** The pair: the branch on the upper rail and the one on the lower rail. */
+    final int upperBranch;
+    final int lowerBranch;
     /** Pulse length, electrical radians. */
     final double lengthRad;
     /** Integrals over the pulse, in seconds: of i, of i^2 and of (e_k - e_j) i. */
@@ -45,15 +46,16 @@ final class BridgePulse {
     /** Peak current, A. */
     final double peakA;
 
-    private final double[] f;
+    /** Taylor coefficients f_n of i / I0 in x. */
+    private final double[] taylor;
     private final double theta;
     private final double kappa;
     private final double xSeries;
 
     private BridgePulse(double theta, double kappa, double[] f) {
-        this.k = -1;
-        this.j = -1;
-        this.f = f;
+        this.upperBranch = -1;
+        this.lowerBranch = -1;
+        this.taylor = f;
         this.theta = theta;
         this.kappa = kappa;
         this.xSeries = MAX_KAPPA_X / kappa;
@@ -64,15 +66,15 @@ final class BridgePulse {
         peakA = 0;
     }
 
-    private BridgePulse(BridgeModel md, int k, int j, BridgePulse shape, double lengthRad) {
-        this.k = k;
-        this.j = j;
-        this.f = shape.f;
+    private BridgePulse(BridgeModel model, int k, int j, BridgePulse shape, double lengthRad) {
+        this.upperBranch = k;
+        this.lowerBranch = j;
+        this.taylor = shape.taylor;
         this.theta = shape.theta;
         this.kappa = shape.kappa;
         this.xSeries = shape.xSeries;
         this.lengthRad = lengthRad;
-        double scale = md.emfPeakPairV / (md.w * 2 * md.l);
+        double scale = model.emfPeakPairV / (model.omega * 2 * model.inductanceH);
         double q1 = 0;
         double q2 = 0;
         double pe = 0;
@@ -90,9 +92,9 @@ final class BridgePulse {
             a = b;
             b = Math.min(lengthRad, 2 * b);
         }
-        chargeC = scale * q1 / md.w;
-        squareA2s = scale * scale * q2 / md.w;
-        emfEnergyJ = md.emfPeakPairV * scale * pe / md.w;
+        chargeC = scale * q1 / model.omega;
+        squareA2s = scale * scale * q2 / model.omega;
+        emfEnergyJ = model.emfPeakPairV * scale * pe / model.omega;
         double top = new BrentOptimizer(1e-13, 1e-300).optimize(new MaxEval(200),
                 new UnivariateObjectiveFunction(this::series), GoalType.MAXIMIZE,
                 new SearchInterval(0, lengthRad)).getValue();
@@ -105,9 +107,9 @@ final class BridgePulse {
      *
      * @param remainingRad electrical angle left in the sweep
      */
-    static BridgePulse of(BridgeModel md, int k, int j, double remainingRad) {
-        double theta = md.windowHalfRad;
-        double kappa = (2 * md.r + md.rDc) / (md.w * 2 * md.l);
+    static BridgePulse of(BridgeModel model, int k, int j, double remainingRad) {
+        double theta = model.windowHalfRad;
+        double kappa = (2 * model.resistanceOhm + model.dcResistanceOhm) / (model.omega * 2 * model.inductanceH);
         double xMax = MAX_END_PSI_RAD + theta;
         if (theta > MAX_WINDOW_RAD) {
             return null;
@@ -127,7 +129,7 @@ final class BridgePulse {
         if (length > remainingRad) {
             return null;
         }
-        return new BridgePulse(md, k, j, shape, length);
+        return new BridgePulse(model, k, j, shape, length);
     }
 
     /** Series coefficients f_n (n >= 2; f_0 = f_1 = 0) of i / I0. */
@@ -164,8 +166,8 @@ final class BridgePulse {
 
     private double horner(double x) {
         double sum = 0;
-        for (int n = f.length - 1; n >= 2; n--) {
-            sum = sum * x + f[n];
+        for (int n = taylor.length - 1; n >= 2; n--) {
+            sum = sum * x + taylor[n];
         }
         return sum;
     }

@@ -28,7 +28,7 @@ final class BridgeResults {
                 c.batteryVoltageV(), 0, 0, 0, vll, 0, 0, 0, 0, 0, 0, 0, 0, 0);
     }
 
-    static BridgeOperatingPoint assemble(BridgeCircuit c, BridgeModel md, BridgeSweep sw) {
+    static BridgeOperatingPoint assemble(BridgeCircuit c, BridgeModel model, SymmetryIntervalTrace trace) {
         double sumI2 = 0;
         double emfPower = 0;
         double qIdc = 0;
@@ -37,18 +37,18 @@ final class BridgeResults {
         double conductingTime = 0;
         double overlapTime = 0;
         double offTime = 0;
-        for (int i = 0; i < sw.segments.size(); i++) {
-            BridgeSegment s = sw.segments.get(i);
-            double d = sw.durations.get(i);
+        for (int i = 0; i < trace.segments.size(); i++) {
+            BridgeSegment s = trace.segments.get(i);
+            double d = trace.durations.get(i);
             BasisIntegrals bi = new BasisIntegrals(s, d);
-            BridgePulse pulse = sw.pulses.get(i);
+            BridgePulse pulse = trace.pulses.get(i);
             if (pulse != null) {
                 sumI2 += 2 * pulse.squareA2s;
                 emfPower += pulse.emfEnergyJ;
                 qIdc += pulse.chargeC;
                 qIdc2 += pulse.squareA2s;
             } else {
-                for (int k = 0; k < md.m; k++) {
+                for (int k = 0; k < model.branches; k++) {
                     if (s.sign[k] != 0) {
                         sumI2 += bi.product(s.current[k], s.current[k]);
                         emfPower += bi.product(s.emf(k), s.current[k]);
@@ -58,7 +58,7 @@ final class BridgeResults {
                 qIdc += bi.integral(idc);
                 qIdc2 += bi.product(idc, idc);
             }
-            for (int[] pair : pairs(md.m)) {
+            for (int[] pair : pairs(model.branches)) {
                 double[] v = minus(s.terminal(pair[0]), s.terminal(pair[1]));
                 vll2 += bi.product(v, v);
             }
@@ -66,22 +66,22 @@ final class BridgeResults {
             overlapTime += s.conducting() == 3 ? d : 0;
             offTime += s.off() ? d : 0;
         }
-        double ts = md.sweepS;
+        double ts = model.intervalS;
         double idcAvg = qIdc / ts;
         double idcRms2 = Math.max(qIdc2 / ts, 0);
         double i2 = Math.max(sumI2 / ts, 0);
         double vb = c.batteryVoltageV();
-        boolean three = md.m == 3;
+        boolean three = model.branches == 3;
         ConductionMode mode = offTime > 0 ? ConductionMode.DISCONTINUOUS
                 : three ? ConductionMode.CONTINUOUS_WITH_OVERLAP : ConductionMode.CONTINUOUS;
         double perDiodeFactor = three ? 1 : 0.5;
-        double linePeak = peak(md, sw, false);
+        double linePeak = peak(model, trace, false);
         return new BridgeOperatingPoint(mode, idcAvg, Math.sqrt(idcRms2), vb, vb + c.dcResistanceOhm() * idcAvg,
-                Math.sqrt(i2 / md.m), linePeak, three ? peak(md, sw, true) : linePeak,
-                Math.sqrt(Math.max(vll2, 0) / (pairs(md.m).size() * ts)), emfPower / ts, vb * idcAvg,
-                md.rWinding * i2, md.rCable * i2, c.dcCableResistanceOhm() * idcRms2,
+                Math.sqrt(i2 / model.branches), linePeak, three ? peak(model, trace, true) : linePeak,
+                Math.sqrt(Math.max(vll2, 0) / (pairs(model.branches).size() * ts)), emfPower / ts, vb * idcAvg,
+                model.windingResistanceOhm * i2, model.cableResistanceOhm * i2, c.dcCableResistanceOhm() * idcRms2,
                 c.batteryInternalResistanceOhm() * idcRms2, 2 * c.diodeDropV() * idcAvg,
-                Math.toDegrees(conductingTime * md.w) * perDiodeFactor, Math.toDegrees(overlapTime * md.w));
+                Math.toDegrees(conductingTime * model.omega) * perDiodeFactor, Math.toDegrees(overlapTime * model.omega));
     }
 
     private static List<int[]> pairs(int m) {
@@ -102,39 +102,39 @@ final class BridgeResults {
      * of each segment and waveform that comes within {@link #PEAK_MARGIN} of the overall best is refined, so the
      * answer does not depend on where the sweep happens to start.
      */
-    private static double peak(BridgeModel md, BridgeSweep sw, boolean delta) {
+    private static double peak(BridgeModel model, SymmetryIntervalTrace trace, boolean delta) {
         double best = 0;
         double[] bs = new double[BridgeSegment.NB];
-        int nf = delta ? (md.m == 3 ? 3 : 1) : md.m;
-        int count = sw.segments.size() * nf;
+        int nf = delta ? (model.branches == 3 ? 3 : 1) : model.branches;
+        int count = trace.segments.size() * nf;
         double[] candValue = new double[count];
         double[] candTau = new double[count];
         double[][] candFn = new double[count][];
         int[] candSeg = new int[count];
         int nc = 0;
-        for (int i = 0; i < sw.segments.size(); i++) {
-            BridgeSegment s = sw.segments.get(i);
-            double d = sw.durations.get(i);
+        for (int i = 0; i < trace.segments.size(); i++) {
+            BridgeSegment s = trace.segments.get(i);
+            double d = trace.durations.get(i);
             if (s.off()) {
                 continue;
             }
-            BridgePulse pulse = sw.pulses.get(i);
+            BridgePulse pulse = trace.pulses.get(i);
             if (pulse != null) {
                 // line currents +i and -i: the largest delta combination is (i - (-i)) / 3
-                best = Math.max(best, delta && md.m == 3 ? 2 * pulse.peakA / 3 : pulse.peakA);
+                best = Math.max(best, delta && model.branches == 3 ? 2 * pulse.peakA / 3 : pulse.peakA);
                 continue;
             }
-            int samples = Math.max(2, (int) Math.ceil(d * md.w / PEAK_SAMPLE_RAD));
+            int samples = Math.max(2, (int) Math.ceil(d * model.omega / PEAK_SAMPLE_RAD));
             int first = nc;
             for (int f = 0; f < nf; f++) {
-                candFn[nc + f] = waveform(md, s, delta, f);
+                candFn[nc + f] = waveform(model, s, delta, f);
                 candValue[nc + f] = -1;
                 candSeg[nc + f] = i;
             }
             // basis advanced by recurrence between samples: the samples only choose where to refine exactly
             double h = d / samples;
-            double cStep = Math.cos(md.w * h);
-            double sStep = Math.sin(md.w * h);
+            double cStep = Math.cos(model.omega * h);
+            double sStep = Math.sin(model.omega * h);
             double e1Step = Math.exp(s.lambda1 * h);
             double e2Step = Math.exp(s.lambda2 * h);
             s.basis(0, bs);
@@ -166,7 +166,7 @@ final class BridgeResults {
         best = sampled;
         for (int c = 0; c < nc; c++) {
             if (candValue[c] >= (1 - PEAK_MARGIN) * sampled && candValue[c] > 0) {
-                best = Math.max(best, refine(md, sw.segments.get(candSeg[c]), sw.durations.get(candSeg[c]),
+                best = Math.max(best, refine(model, trace.segments.get(candSeg[c]), trace.durations.get(candSeg[c]),
                         candFn[c], candTau[c]));
             }
         }
@@ -174,11 +174,11 @@ final class BridgeResults {
     }
 
     /** Coefficients of waveform f of a segment: line current f, or (i_p - i_q)/3 for the f-th phase pair. */
-    private static double[] waveform(BridgeModel md, BridgeSegment s, boolean delta, int f) {
+    private static double[] waveform(BridgeModel model, BridgeSegment s, boolean delta, int f) {
         if (!delta) {
             return s.current[f];
         }
-        int[] pair = pairs(md.m).get(f);
+        int[] pair = pairs(model.branches).get(f);
         double[] out = minus(s.current[pair[0]], s.current[pair[1]]);
         for (int j = 0; j < out.length; j++) {
             out[j] /= 3;
@@ -187,8 +187,8 @@ final class BridgeResults {
     }
 
     /** The maximum of |fn| within one sample step of bestTau in a segment of length d. */
-    private static double refine(BridgeModel md, BridgeSegment seg, double d, double[] fn, double bestTau) {
-        double step = PEAK_SAMPLE_RAD / md.w;
+    private static double refine(BridgeModel model, BridgeSegment seg, double d, double[] fn, double bestTau) {
+        double step = PEAK_SAMPLE_RAD / model.omega;
         double lo = Math.max(0, bestTau - step);
         double hi = Math.min(d, bestTau + step);
         double[] b2 = new double[BridgeSegment.NB];
@@ -198,7 +198,7 @@ final class BridgeResults {
         }
         // the peak is where the derivative changes sign from + to -; its root is cheaper to locate than the maximum
         double sgn = Math.signum(value(seg, fn, bestTau, b2));
-        double w = md.w;
+        double w = model.omega;
         double[] slope = {sgn * w * fn[1], -sgn * w * fn[0], 0, sgn * seg.lambda1 * fn[3], sgn * seg.lambda2 * fn[4]};
         if (value(seg, slope, lo, b2) > 0 && value(seg, slope, hi, b2) < 0) {
             double root = new BrentSolver(1e-15, 1e-14 * step).solve(200, tau -> value(seg, slope, tau, b2), lo, hi);

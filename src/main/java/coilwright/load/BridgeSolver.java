@@ -11,17 +11,18 @@ import java.util.Locale;
  * <p>
  * Method: the circuit is piecewise linear; within each conduction state the branch currents are exact sums
  * of exponentials and sinusoids ({@link BridgeSegment}); switching events are located on these closed forms
- * ({@link BridgeSweep}). The waveform repeats every 60 electrical degrees with the phases rotated and negated
+ * ({@link SymmetryIntervalTrace}). The waveform repeats every 60 electrical degrees with the phases rotated and negated
  * (three-phase) or every half period negated (single-phase), so the periodic state solves
  * Map(x0) = P x0 over one such interval. Discontinuous conduction is found directly (an interval with no
- * diode conducting fixes the state to zero); otherwise the equation is solved by Newton's method with a
- * finite-difference Jacobian, started from a few fixed-point sweeps and anchored inside an interval where
- * the most diodes conduct (where the map is smooth). Shooting for periodic solutions of switched circuits
+ * diode conducting fixes the state to zero); otherwise the equation is solved by Newton's method with the
+ * exact Jacobian of the map (each segment's state transition in closed form and the saltation at each event:
+ * the event time moves with the state by the implicit function theorem on the event condition), started from a
+ * few fixed-point sweeps and anchored inside an interval where the most diodes conduct (where the map is smooth). Shooting for periodic solutions of switched circuits
  * follows Aprille and Trick (1972); the exact piecewise solution is the classical treatment of the bridge
  * in, e.g., Mohan, Undeland and Robbins, "Power Electronics", 2003, ch. 5.
  * <p>
- * Safeguards, in order: the warm start (when a sweep gives one); the cold start above; then Newton with a fresh
- * finite-difference Jacobian at every step and a longer line search (damped Newton) after more fixed-point sweeps;
+ * Safeguards, in order: the warm start (when a sweep gives one); the cold start above; then Newton with a longer
+ * line search (damped Newton) after more fixed-point sweeps;
  * then the plain fixed-point sweeps themselves, which are the circuit's own transient and contract with the factor
  * q = exp(-R T_s / L) per interval (the branch energy L |i - i'|^2 / 2 of two solutions decays at least at the rate
  * 2R/L: resistors dissipate and ideal diodes and the battery are monotone), stopped when the contraction bound
@@ -85,9 +86,9 @@ public final class BridgeSolver {
             return BridgeResults.belowCutIn(circuit);
         }
         checkResolvable(circuit);
-        BridgeModel md = new BridgeModel(circuit);
+        BridgeModel model = new BridgeModel(circuit);
         try {
-            return BridgeResults.assemble(circuit, md, periodic(md, warm));
+            return BridgeResults.assemble(circuit, model, periodic(model, warm));
         } catch (NoPeriodicSolution | MathIllegalStateException | MathIllegalArgumentException e) {
             if (warm != null) {
                 warm.forget();
@@ -129,20 +130,20 @@ public final class BridgeSolver {
                 cause.getMessage()), cause);
     }
 
-    static BridgeSweep periodic(BridgeModel md) {
-        return periodic(md, null);
+    static SymmetryIntervalTrace periodic(BridgeModel model) {
+        return periodic(model, null);
     }
 
-    private static BridgeSweep periodic(BridgeModel md, BridgeWarmStart warm) {
+    private static SymmetryIntervalTrace periodic(BridgeModel model, BridgeWarmStart warm) {
         if (warm != null && warm.ready()) {
-            BridgeSweep fast = warmNewton(md, warm);
+            SymmetryIntervalTrace fast = warmNewton(model, warm);
             if (fast != null) {
                 return fast;
             }
         }
         RuntimeException first;
         try {
-            return coldNewton(md, warm, FIXED_POINT_SWEEPS, false);
+            return coldNewton(model, warm, FIXED_POINT_SWEEPS, false);
         } catch (NoPeriodicSolution | MathIllegalStateException | MathIllegalArgumentException e) {
             first = e;
         }
@@ -150,12 +151,12 @@ public final class BridgeSolver {
             warm.forget();
         }
         try {
-            return coldNewton(md, null, FALLBACK_SWEEPS, true);
+            return coldNewton(model, null, FALLBACK_SWEEPS, true);
         } catch (NoPeriodicSolution | MathIllegalStateException | MathIllegalArgumentException e) {
             // the transient below needs neither a Jacobian nor a smooth map
         }
         try {
-            return settledTransient(md);
+            return settledTransient(model);
         } catch (NoPeriodicSolution | MathIllegalStateException | MathIllegalArgumentException e) {
             throw new NoPeriodicSolution(first.getMessage() + "; damped Newton and " + e.getMessage());
         }
@@ -163,39 +164,39 @@ public final class BridgeSolver {
 
     /**
      * Fixed-point sweeps from rest, then Newton anchored inside the busiest segment. With {@code damped}, the
-     * Jacobian is recomputed at every step (no chord, no Broyden update) and the line search goes further.
+     * line search goes further and Newton may take more steps.
      */
-    private static BridgeSweep coldNewton(BridgeModel md, BridgeWarmStart warm, int sweeps, boolean damped) {
-        int m = md.m;
-        BridgeSweep sw = new BridgeSweep(md, 0, new double[m]);
+    private static SymmetryIntervalTrace coldNewton(BridgeModel model, BridgeWarmStart warm, int sweeps, boolean damped) {
+        int m = model.branches;
+        SymmetryIntervalTrace trace = new SymmetryIntervalTrace(model, 0, new double[m]);
         for (int it = 0; it < sweeps; it++) {
-            int off = longestOff(sw);
+            int off = longestOff(trace);
             if (off >= 0) {
-                BridgeSegment s = sw.segments.get(off);
-                BridgeSweep fromZero = new BridgeSweep(md, s.t0 + sw.durations.get(off) / 2, new double[m]);
+                BridgeSegment s = trace.segments.get(off);
+                SymmetryIntervalTrace fromZero = new SymmetryIntervalTrace(model, s.t0 + trace.durations.get(off) / 2, new double[m]);
                 if (endsOff(fromZero)) {
                     if (warm != null) {
                         warm.forget();
                     }
                     return fromZero;
                 }
-                sw = fromZero;
+                trace = fromZero;
             }
             double[] next = new double[m];
-            md.unshift(sw.end, next);
-            sw = new BridgeSweep(md, sw.t0, next);
+            model.unshift(trace.endCurrentsA, next);
+            trace = new SymmetryIntervalTrace(model, trace.startTimeS, next);
         }
-        int best = busiest(sw);
-        BridgeSegment anchor = sw.segments.get(best);
-        double half = sw.durations.get(best) / 2;
-        double[] xa = new double[md.m];
+        int best = busiest(trace);
+        BridgeSegment anchor = trace.segments.get(best);
+        double half = trace.durations.get(best) / 2;
+        double[] xa = new double[model.branches];
         anchor.currentsAt(half, xa);
-        BridgeNewton nt = new BridgeNewton(md, anchor.t0 + half, java.util.Arrays.copyOf(xa, md.m - 1), null);
-        nt.damped = damped;
-        BridgeSweep result = nt.solve();
+        BridgeNewton newton = new BridgeNewton(model, anchor.t0 + half, java.util.Arrays.copyOf(xa, model.branches - 1));
+        newton.damped = damped;
+        SymmetryIntervalTrace result = newton.solve();
         if (warm != null) {
             if (longestOff(result) < 0) {
-                warm.remember(result, md.w, nt.jac);
+                warm.remember(result, model.omega);
             } else {
                 warm.forget();
             }
@@ -208,46 +209,46 @@ public final class BridgeSolver {
      * contraction bound q / (1 - q) |x_next - x| on the distance to the periodic state falls below
      * {@link #TRANSIENT_TOLERANCE} of the current scale.
      */
-    private static BridgeSweep settledTransient(BridgeModel md) {
-        double q = Math.exp(-md.r * md.sweepS / md.l);
-        double factor = q / -Math.expm1(-md.r * md.sweepS / md.l);
-        BridgeSweep sw = new BridgeSweep(md, 0, new double[md.m]);
-        double[] x = new double[md.m];
-        double[] next = new double[md.m];
+    private static SymmetryIntervalTrace settledTransient(BridgeModel model) {
+        double q = Math.exp(-model.resistanceOhm * model.intervalS / model.inductanceH);
+        double factor = q / -Math.expm1(-model.resistanceOhm * model.intervalS / model.inductanceH);
+        SymmetryIntervalTrace trace = new SymmetryIntervalTrace(model, 0, new double[model.branches]);
+        double[] x = new double[model.branches];
+        double[] next = new double[model.branches];
         for (int it = 0; it < MAX_TRANSIENT_SWEEPS; it++) {
-            md.unshift(sw.end, next);
+            model.unshift(trace.endCurrentsA, next);
             double step = 0;
             double size = 0;
-            for (int k = 0; k < md.m; k++) {
+            for (int k = 0; k < model.branches; k++) {
                 step += (next[k] - x[k]) * (next[k] - x[k]);
                 size = Math.max(size, Math.abs(next[k]));
             }
-            double tolerance = Math.max(TRANSIENT_TOLERANCE * Math.max(size, 1e-3 * md.currentScaleA()),
-                    NOISE_TOLERANCE * sw.coefficientMagnitudeA);
+            double tolerance = Math.max(TRANSIENT_TOLERANCE * Math.max(size, 1e-3 * model.currentScaleA()),
+                    NOISE_TOLERANCE * trace.coefficientMagnitudeA);
             if (factor * Math.sqrt(step) <= tolerance) {
-                return sw;
+                return trace;
             }
-            System.arraycopy(next, 0, x, 0, md.m);
-            sw = new BridgeSweep(md, 0, x.clone());
+            System.arraycopy(next, 0, x, 0, model.branches);
+            trace = new SymmetryIntervalTrace(model, 0, x.clone());
         }
         throw new NoPeriodicSolution("the transient had not settled after " + MAX_TRANSIENT_SWEEPS
                 + " intervals (contraction factor " + q + ")");
     }
 
     /** Newton from the predicted state at the last solution's anchor angle; null when that does not work out. */
-    private static BridgeSweep warmNewton(BridgeModel md, BridgeWarmStart warm) {
+    private static SymmetryIntervalTrace warmNewton(BridgeModel model, BridgeWarmStart warm) {
         double anchorRad = warm.anchorRad();
-        double[] y = warm.predict(anchorRad, md.w, md.m - 1);
+        double[] y = warm.predict(anchorRad, model.omega, model.branches - 1);
         if (y == null) {
             return null;
         }
         try {
-            BridgeNewton nt = new BridgeNewton(md, anchorRad / md.w, y, warm.jacobian);
-            BridgeSweep result = nt.solve();
+            BridgeNewton newton = new BridgeNewton(model, anchorRad / model.omega, y);
+            SymmetryIntervalTrace result = newton.solve();
             if (longestOff(result) >= 0) {
                 return null;
             }
-            warm.remember(result, md.w, nt.jac);
+            warm.remember(result, model.omega);
             return result;
         } catch (NoPeriodicSolution | MathIllegalStateException | MathIllegalArgumentException e) {
             return null;
@@ -255,12 +256,12 @@ public final class BridgeSolver {
     }
 
     /** Index of the segment with the most conducting diodes (the longest among equals): where the map is smooth. */
-    static int busiest(BridgeSweep sw) {
+    static int busiest(SymmetryIntervalTrace trace) {
         int best = 0;
-        for (int i = 1; i < sw.segments.size(); i++) {
-            int ci = sw.segments.get(i).conducting();
-            int cb = sw.segments.get(best).conducting();
-            if (ci > cb || ci == cb && sw.durations.get(i) > sw.durations.get(best)) {
+        for (int i = 1; i < trace.segments.size(); i++) {
+            int ci = trace.segments.get(i).conducting();
+            int cb = trace.segments.get(best).conducting();
+            if (ci > cb || ci == cb && trace.durations.get(i) > trace.durations.get(best)) {
                 best = i;
             }
         }
@@ -268,18 +269,18 @@ public final class BridgeSolver {
     }
 
 
-    private static int longestOff(BridgeSweep sw) {
+    private static int longestOff(SymmetryIntervalTrace trace) {
         int idx = -1;
-        for (int i = 0; i < sw.segments.size(); i++) {
-            if (sw.segments.get(i).off() && sw.durations.get(i) > 0
-                    && (idx < 0 || sw.durations.get(i) > sw.durations.get(idx))) {
+        for (int i = 0; i < trace.segments.size(); i++) {
+            if (trace.segments.get(i).off() && trace.durations.get(i) > 0
+                    && (idx < 0 || trace.durations.get(i) > trace.durations.get(idx))) {
                 idx = i;
             }
         }
         return idx;
     }
 
-    private static boolean endsOff(BridgeSweep sw) {
-        return sw.segments.get(sw.segments.size() - 1).off();
+    private static boolean endsOff(SymmetryIntervalTrace trace) {
+        return trace.segments.get(trace.segments.size() - 1).off();
     }
 }

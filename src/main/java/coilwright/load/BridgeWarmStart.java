@@ -3,7 +3,7 @@ package coilwright.load;
 /**
  * What solved operating points tell the next one of a sweep over speed: the last few continuous-conduction
  * periodic solutions (for a predicted start state at one electrical angle, extrapolated in frequency by the
- * Lagrange polynomial through them) and the last Newton Jacobian (reused as a chord, updated by Broyden's formula).
+ * Lagrange polynomial through them).
  * Only a starting guess: the solver still converges to its own tolerance, and falls back to the cold start when
  * the guess fails. Mutable; one instance per sweep, not shared between threads.
  */
@@ -16,50 +16,45 @@ final class BridgeWarmStart {
     private static final int HISTORY = 3;
 
     /** Most recent first. */
-    private final BridgeSweep[] sweeps = new BridgeSweep[HISTORY];
-    private final double[] ws = new double[HISTORY];
+    private final SymmetryIntervalTrace[] traces = new SymmetryIntervalTrace[HISTORY];
+    private final double[] omegas = new double[HISTORY];
     private int count;
-    /** Newton Jacobian of the last solution (independent currents at the anchor), or null. */
-    double[][] jacobian;
 
     /** Forgets everything (after a point with no or discontinuous conduction). */
     void forget() {
-        java.util.Arrays.fill(sweeps, null);
+        java.util.Arrays.fill(traces, null);
         count = 0;
-        jacobian = null;
     }
 
     boolean ready() {
         return count > 0;
     }
 
-    /** Records a continuous-conduction solution and its Newton Jacobian. */
-    void remember(BridgeSweep sweep, double w, double[][] jac) {
+    /** Records a continuous-conduction solution. */
+    void remember(SymmetryIntervalTrace trace, double w) {
         for (int i = HISTORY - 1; i > 0; i--) {
-            sweeps[i] = sweeps[i - 1];
-            ws[i] = ws[i - 1];
+            traces[i] = traces[i - 1];
+            omegas[i] = omegas[i - 1];
         }
-        sweeps[0] = sweep;
-        ws[0] = w;
+        traces[0] = trace;
+        omegas[0] = w;
         count = Math.min(count + 1, HISTORY);
-        jacobian = jac;
     }
 
     /**
      * Electrical angle of the anchor for the next solve. The last anchor is kept while it stays well inside the
-     * last solution's busiest segment (so the chord Jacobian, which belongs to that anchor, stays apt); otherwise
-     * the middle of that segment.
+     * last solution's busiest segment; otherwise the middle of that segment.
      */
     double anchorRad() {
-        BridgeSweep last = sweeps[0];
+        SymmetryIntervalTrace last = traces[0];
         int best = BridgeSolver.busiest(last);
         double t0 = last.segments.get(best).t0;
         double d = last.durations.get(best);
-        double keptT = last.t0;
+        double keptT = last.startTimeS;
         if (keptT >= t0 + ANCHOR_MARGIN * d && keptT <= t0 + (1 - ANCHOR_MARGIN) * d) {
-            return ws[0] * keptT;
+            return omegas[0] * keptT;
         }
-        return ws[0] * (t0 + d / 2);
+        return omegas[0] * (t0 + d / 2);
     }
 
     /**
@@ -68,29 +63,29 @@ final class BridgeWarmStart {
      */
     /** The last solution's independent currents at the anchor angle (its first n states), or null. */
     private double[] latest(double anchorRad, int n) {
-        double[] y = sweeps[0].stateAtAngle(anchorRad, ws[0]);
+        double[] y = traces[0].stateAtAngle(anchorRad, omegas[0]);
         return y == null ? null : java.util.Arrays.copyOf(y, n);
     }
 
     double[] predict(double anchorRad, double w, int n) {
         int use = 1;
-        if (count >= 2 && ws[0] != ws[1] && Math.abs((w - ws[0]) / (ws[0] - ws[1])) <= MAX_EXTRAPOLATION) {
+        if (count >= 2 && omegas[0] != omegas[1] && Math.abs((w - omegas[0]) / (omegas[0] - omegas[1])) <= MAX_EXTRAPOLATION) {
             use = count;
         }
         double[] y = new double[n];
         for (int i = 0; i < use; i++) {
-            double[] yi = sweeps[i].stateAtAngle(anchorRad, ws[i]);
+            double[] yi = traces[i].stateAtAngle(anchorRad, omegas[i]);
             if (yi == null) {
                 return i == 0 ? null : latest(anchorRad, n);
             }
             double weight = 1;
             for (int j = 0; j < use; j++) {
                 if (j != i) {
-                    double den = ws[i] - ws[j];
+                    double den = omegas[i] - omegas[j];
                     if (den == 0) {
                         return latest(anchorRad, n); // the same speed twice: no extrapolation
                     }
-                    weight *= (w - ws[j]) / den;
+                    weight *= (w - omegas[j]) / den;
                 }
             }
             for (int k = 0; k < n; k++) {
