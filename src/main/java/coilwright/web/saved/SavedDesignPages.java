@@ -9,6 +9,8 @@ import coilwright.system.EvaluationRequest;
 import coilwright.web.CarriedDesign;
 import coilwright.web.Json;
 import coilwright.web.NextSteps;
+import coilwright.service.EvaluationService;
+import coilwright.web.pages.DesignFigures;
 import coilwright.web.pages.DesignInputs;
 import coilwright.web.units.Units;
 import coilwright.web.NotFoundException;
@@ -28,10 +30,12 @@ import java.util.Optional;
 /** The pages of saved designs. Title and notes are user text: templates show them with th:text only. */
 public final class SavedDesignPages {
     private final DesignLibrary library;
+    private final EvaluationService evaluation;
     private final RecordBinder binder = new RecordBinder(Json.mapper());
 
-    public SavedDesignPages(DesignLibrary library) {
+    public SavedDesignPages(DesignLibrary library, EvaluationService evaluation) {
         this.library = library;
+        this.evaluation = evaluation;
     }
 
     public void newForm(Context ctx) {
@@ -87,8 +91,22 @@ public final class SavedDesignPages {
 
     public void print(Context ctx) {
         SavedRevision r = ofDesign(ctx);
-        ctx.render("saved-print", Map.of("rev", r, "results", ResultView.of(library.tree(r.resultJson())),
+        Map<String, Object> model = new HashMap<>(Map.of("rev", r, "results", ResultView.of(library.tree(r.resultJson())),
                 "inputs", DesignInputs.of(library.document(r).design(), Units.of(ctx))));
+        model.putAll(figures(r, library.recompute(r)));
+        ctx.render("saved-print", model);
+    }
+
+    /**
+     * The charts and winding layout of a saved input as this server computes them (a cached evaluation: recomputing
+     * already evaluated it), and whether they differ from the saved numbers. None when the tool cannot compute it.
+     */
+    private Map<String, Object> figures(SavedRevision r, Recomputation again) {
+        if (again.results().isEmpty()) {
+            return Map.of();
+        }
+        EvaluationRequest design = library.document(r).design();
+        return Map.of("figures", DesignFigures.of(evaluation.evaluate(design), design), "figuresDiffer", again.differs());
     }
 
     public void compare(Context ctx) {
@@ -117,6 +135,7 @@ public final class SavedDesignPages {
         model.put("inputs", DesignInputs.of(design, Units.of(ctx)));
         model.put("results", ResultView.of(recomputedView && again.results().isPresent() ? again.results().get()
                 : library.tree(r.resultJson())));
+        model.putAll(figures(r, again));
         ctx.render("saved-revision", model);
     }
 
