@@ -2,6 +2,7 @@ package coilwright.web.pages;
 
 import coilwright.system.AlternatorEvaluation;
 import coilwright.system.EvaluationRequest;
+import coilwright.web.charts.ChartSpec;
 import java.util.List;
 
 /**
@@ -14,5 +15,10 @@ import java.util.List;
 public record DesignFigures(List<String> charts, WindingView winding) {
     public static DesignFigures of(AlternatorEvaluation e, EvaluationRequest request) {
         return new DesignFigures(ResultCharts.of(e, request), WindingView.of(e.alternator().winding()));
+    }
+
+    /** Another chart drawn as the results page draws its own (scaling to its box on screen and paper). */
+    public static String chart(ChartSpec spec) {
+        return ResultCharts.scalable(spec);
     }
 }

@@ -114,7 +114,11 @@ public final class SavedDesignPages {
         String b = ctx.queryParam("b");
         Map<String, Object> model = new HashMap<>(Map.of("a", a == null ? "" : a, "b", b == null ? "" : b));
         if (a != null && !a.isBlank() && b != null && !b.isBlank()) {
-            model.put("comparison", Comparison.of(library, library.resolve(a.strip()), library.resolve(b.strip())));
+            SavedRevision first = library.resolve(a.strip());
+            SavedRevision second = library.resolve(b.strip());
+            model.put("comparison", Comparison.of(library, first, second));
+            CompareCurves.of(library.tree(first.resultJson()), library.tree(second.resultJson()))
+                    .ifPresent(svg -> model.put("overlay", svg));
         }
         ctx.render("saved-compare", model);
     }

@@ -186,6 +186,10 @@ class SavedDesignPagesTest {
                 .body(containsString("<code>design.alternator.turnsPerCoil</code>"))
                 .body(containsString("<mark>30</mark>")).body(containsString("<mark>33</mark>"))
                 .body(containsString("(differs)"));
+        coilwright.web.Html page = coilwright.web.Html.of(given().get("/compare?a=" + a + "&b=" + b).then().extract().response());
+        String overlay = page.id("compare-curves").text();
+        assertTrue(overlay.contains("Power to load, first") && overlay.contains("Power to load, second")
+                && overlay.contains("Open-circuit EMF, second"), overlay);
         given().get("/compare?a=" + a + "&b=" + a).then().statusCode(200).body(containsString("No differences"));
         given().get("/compare").then().statusCode(200).body(containsString("name=\"a\""));
     }
