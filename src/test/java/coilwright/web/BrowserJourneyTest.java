@@ -101,6 +101,10 @@ class BrowserJourneyTest {
             assertEquals("Hilltop 3.6 m rotor, 48 V", text(d, "h1"));
             assertFalse(d.findElements(By.cssSelector(".saved-results .summary .figure")).isEmpty(), "the client reads the results");
             assertTrue(d.findElement(By.id("next-wind")).isDisplayed());
+            // and sees what was designed: the inputs, the curves and the winding
+            assertTrue(text(d, "#design-inputs").contains("45"), "the turns per coil are among the inputs");
+            assertEquals(3, d.findElements(By.cssSelector("#design-charts .chart svg")).size());
+            assertFalse(d.findElements(By.cssSelector("#design-winding .unrolled svg")).isEmpty());
         }
     }
 
@@ -140,10 +144,13 @@ class BrowserJourneyTest {
             assertTrue(d.findElements(By.cssSelector("table.compare-results tr.differs")).size() > 0, "results differ");
             screenshot(d, "consultant-compare");
 
+            assertTrue(text(d, "#compare-curves").contains("Power to load, second"), "both revisions' curves on one chart");
             click(d, "table.compare-sides tbody tr:nth-child(2) td:nth-child(3) a");
             click(d, ".exports a[href$='/print']");
             assertEquals("Client A, 31 turns", text(d, "h1"));
             assertFalse(d.findElements(By.cssSelector(".saved-results .summary .figure")).isEmpty(), "the print view has the results");
+            assertEquals(3, d.findElements(By.cssSelector("#design-charts .chart svg")).size(), "the print view has the curves");
+            assertFalse(d.findElements(By.cssSelector("#design-winding .unrolled svg")).isEmpty(), "and the winding");
         }
     }
 
@@ -172,6 +179,39 @@ class BrowserJourneyTest {
             assertTrue(voltage.contains("41.5 V rms"), voltage);
             assertFalse(d.findElements(By.cssSelector(".phase-order li")).isEmpty(), "the coils of each phase in order");
         }
+    }
+
+    @Test
+    void an_installer_in_feet_and_gallons_matches_a_stream_from_the_menu_and_finds_compare_and_the_demos_there() {
+        try (Browser browser = Browser.open()) {
+            ChromeDriver d = browser.driver();
+            d.manage().window().setSize(new Dimension(1300, 1000));
+            d.get(APP.url("/"));
+            click(d, "nav.site-nav a[href='/match/hydro']");
+            assertEquals("L/s", unitOf(d, "site.designFlowM3s"));
+            click(d, ".units-switch a:nth-of-type(2)");
+            assertEquals("US gpm", unitOf(d, "site.designFlowM3s"));
+            assertEquals("190.204", d.findElement(By.id("site.designFlowM3s")).getAttribute("value"), "12 L/s in US gpm");
+            assertEquals("ft", unitOf(d, "site.grossHeadM"));
+            type(d, "site.grossHeadM", "80");
+            click(d, "main form[action='/match/hydro'] button[type=submit]");
+            assertTrue(text(d, "#net-head .value").endsWith(" ft"), text(d, "#net-head .value"));
+            assertEquals("80", d.findElement(By.id("site.grossHeadM")).getAttribute("value"), "what was typed stays");
+            screenshot(d, "installer-hydro-imperial");
+            click(d, ".units-switch a:nth-of-type(1)");
+            assertEquals("24.384", d.findElement(By.id("site.grossHeadM")).getAttribute("value"), "80 ft is 24.384 m");
+            assertTrue(text(d, "#net-head .value").endsWith(" m"), text(d, "#net-head .value"));
+
+            click(d, "nav.site-nav a[href='/demos']");
+            click(d, "main li a");
+            assertEquals(3, d.findElements(By.cssSelector("#design-charts .chart svg")).size(), "a demo shows its curves");
+            click(d, "nav.site-nav a[href='/compare']");
+            assertFalse(d.findElements(By.cssSelector("main form[action='/compare'] input#a")).isEmpty());
+        }
+    }
+
+    private static String unitOf(ChromeDriver d, String field) {
+        return d.findElement(By.id(field)).findElement(By.xpath("..")).findElement(By.cssSelector(".unit")).getText();
     }
 
     @Test

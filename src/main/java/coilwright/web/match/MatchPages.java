@@ -178,6 +178,7 @@ public final class MatchPages {
         m.put("examples", examples.all().stream().map(e -> new Choice(e.slug(), e.title())).toList());
         m.put("runnerKinds", Choice.names(RunnerKind.values()));
         m.put("matchUnit", new MatchFields.Symbols(units));
+        m.put("unitHints", UnitHints.of(form.values(), units));
         String carried = form.value(CarriedDesign.FIELD);
         if (!carried.isBlank()) {
             try {

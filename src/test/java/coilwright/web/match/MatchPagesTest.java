@@ -8,6 +8,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import coilwright.web.Html;
 import coilwright.web.TestApp;
+import io.restassured.response.Response;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
@@ -245,5 +246,29 @@ class MatchPagesTest {
                 imperial.id("matched-speed").selectFirst(".value").text());
         Html back = get(imperial.doc().select(".units-switch a").get(0).attr("href"));
         assertEquals("12", back.value("site.designFlowM3s"), "and back to L/s as typed");
+    }
+
+    @Test
+    void a_stream_typed_in_cubic_metres_a_second_gets_a_hint_with_the_litres_probably_meant() {
+        Map<String, String> f = hydroForm();
+        f.put("site.designFlowM3s", "0.012");
+        f.put("penstock.innerDiameterM", "0.09");
+        Response r = given().formParams(f).post("/match/hydro");
+        Html page = Html.of(r);
+        assertEquals("0.012 L/s is unusual here: if it was in m³/s, did you mean 12 L/s?",
+                page.id("site.designFlowM3s-hint").text());
+        assertEquals("0.09 mm is unusual here: if it was in m, did you mean 90 mm?",
+                page.id("penstock.innerDiameterM-hint").text());
+        assertEquals("0.012", page.value("site.designFlowM3s"), "nothing is changed behind the user's back");
+        Html ordinary = post("/match/hydro", hydroForm(), 200);
+        assertTrue(ordinary.all(".unit-hint").isEmpty(), "12 L/s and 90 mm need no hint");
+    }
+
+    @Test
+    void a_rotor_typed_in_millimetres_gets_a_hint() {
+        Map<String, String> f = windForm();
+        f.put("rotor.diameterM", "2400");
+        Html page = Html.of(given().formParams(f).post("/match/wind"));
+        assertEquals("2400 m is unusual here: if it was in mm, did you mean 2.4 m?", page.id("rotor.diameterM-hint").text());
     }
 }
