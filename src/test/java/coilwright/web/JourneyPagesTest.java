@@ -293,6 +293,8 @@ class JourneyPagesTest {
         // common practice: in star the meter between two line leads reads two phases in series
         assertEquals(2 * rPhase, rLine, 0.01 * rLine);
         assertTrue(bench.id("leads").text().startsWith("Star (Y): join the finishes"));
+        assertTrue(bench.id("connection-sketch").selectFirst("title").text().startsWith("Star (Y)"), "the lead sketch is a star");
+        assertEquals(3, bench.id("connection-sketch").select("g[fill=#fff] circle").size(), "three line leads");
         assertFalse(bench.all(".phase-order li").isEmpty());
         assertFalse(bench.all("figure.unrolled").isEmpty());
 
