@@ -27,7 +27,7 @@ final class UnitHints {
         below(hints, typed, "penstock.innerDiameterM", 5, 1000, "mm", "m");
         below(hints, typed, "runner.diameterM", 5, 1000, "mm", "m");
         String rotor = typed.get("rotor.diameterM");
-        if (number(rotor) && Double.parseDouble(rotor.trim()) > 50) {
+        if (number(rotor) && Double.parseDouble(rotor.trim()) > 50 && Double.parseDouble(rotor.trim()) < 1e6) {
             hints.put("rotor.diameterM", hint(rotor.trim(), "m", Double.parseDouble(rotor.trim()) / 1000, "mm"));
         }
         return hints;

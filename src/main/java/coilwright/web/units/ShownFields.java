@@ -9,7 +9,7 @@ import java.util.regex.Pattern;
  * path; list items as {@code flowDuration[].flowM3s}, matching any index). Converts a whole form at the edge: typed
  * values to SI before binding, SI values to the shown unit when filling a form, and typed values from the units they
  * were typed in to newly chosen ones (the units switch). Text that is not a number is left as typed, so the binder
- * names it.
+ * names it; so is a number too large for a double ("1e999"), which the binder refuses under its field.
  */
 public record ShownFields(Map<String, Shown> fields) {
     /** A plain decimal number as people type it. */
@@ -50,8 +50,10 @@ public record ShownFields(Map<String, Shown> fields) {
         Map<String, String> out = new LinkedHashMap<>(values);
         values.forEach((field, text) -> {
             Shown s = of(field);
-            if (s != null && text != null && NUMBER.matcher(text.trim()).matches()) {
-                out.put(field, conversion.apply(s, Double.parseDouble(text.trim())));
+            double v = s != null && text != null && NUMBER.matcher(text.trim()).matches() ? Double.parseDouble(text.trim())
+                    : Double.NaN;
+            if (Double.isFinite(v)) {
+                out.put(field, conversion.apply(s, v));
             }
         });
         return out;

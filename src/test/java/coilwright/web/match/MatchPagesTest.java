@@ -271,4 +271,17 @@ class MatchPagesTest {
         Html page = Html.of(given().formParams(f).post("/match/wind"));
         assertEquals("2400 m is unusual here: if it was in mm, did you mean 2.4 m?", page.id("rotor.diameterM-hint").text());
     }
+
+    @Test
+    void a_number_too_large_for_a_double_is_refused_under_its_field_in_either_units() {
+        Map<String, String> f = hydroForm();
+        f.put("site.designFlowM3s", "1e999");
+        Html page = post("/match/hydro", f, 400);
+        assertTrue(page.error("site.designFlowM3s").startsWith("site.designFlowM3s"), page.error("site.designFlowM3s"));
+        Map<String, String> w = windForm();
+        w.put("rotor.diameterM", "1e999");
+        assertTrue(post("/match/wind", w, 400).error("rotor.diameterM").startsWith("rotor.diameterM"));
+        given().urlEncodingEnabled(true).queryParam("rotor.diameterM", "1e999").queryParam("enteredIn", "si")
+                .queryParam("units", "imperial").get("/match/wind").then().statusCode(400);
+    }
 }
