@@ -153,7 +153,7 @@ public final class App {
         WindingPage winding = new WindingPage(services.evaluation());
         MatchPages match = new MatchPages(services.matching(), services.examples(), binder);
         RewindPage rewind = new RewindPage(services.rewind(), new FormBinder(binder));
-        SavedDesignPages saved = new SavedDesignPages(services.designs());
+        SavedDesignPages saved = new SavedDesignPages(services.designs(), services.evaluation());
         RevisionForm revision = new RevisionForm(services.designs());
         return List.of(
                 Route.get("/health", new HealthHandler(ready, services.designs()::isStoreReachable)),

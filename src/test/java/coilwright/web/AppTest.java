@@ -200,7 +200,9 @@ class AppTest {
     void home_page_renders_with_nav_and_safety_note() {
         Html page = Html.of(given().get("/").then().statusCode(200).contentType(startsWith("text/html")).extract().response());
         List<String> nav = page.all("nav.site-nav a").eachText();
-        assertTrue(nav.containsAll(List.of("New design", "Winding layout", "Wind match", "Hydro match", "Rewind")), nav.toString());
+        assertTrue(nav.containsAll(List.of("New design", "Winding layout", "Wind match", "Hydro match", "Rewind",
+                "Compare", "Demo designs")), nav.toString());
+        assertTrue(page.all("nav.site-nav a").eachAttr("href").containsAll(List.of("/compare", "/demos")));
         assertEquals("/design/new", page.all("nav.site-nav a").get(1).attr("href"));
         assertTrue(page.doc().selectFirst("footer .safety").text()
                 .contains("electrical installation must follow local codes and licensed practice"));

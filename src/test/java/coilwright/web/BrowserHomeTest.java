@@ -23,7 +23,7 @@ class BrowserHomeTest {
             driver.get(APP.url("/"));
             assertTrue(driver.getTitle().startsWith("Coilwright"), driver.getTitle());
             List<String> nav = driver.findElements(By.cssSelector("nav.site-nav a")).stream().map(WebElement::getText).toList();
-            assertEquals(List.of("Home", "New design", "Winding layout", "Wind match", "Hydro match", "Size an alternator", "Rewind", "Saved designs"), nav);
+            assertEquals(List.of("Home", "New design", "Winding layout", "Wind match", "Hydro match", "Size an alternator", "Rewind", "Saved designs", "Compare", "Demo designs"), nav);
             assertEquals("Coilwright", driver.findElement(By.cssSelector(".brand")).getText());
             assertTrue(driver.findElement(By.cssSelector("footer")).getText().contains("licensed practice"));
             String headerBackground = driver.findElement(By.cssSelector(".site-header")).getCssValue("background-color");

@@ -238,6 +238,35 @@ class JourneyPagesTest {
         assertTrue(get(unitsLink(options, "imperial"), 200).has("stator-options"));
     }
 
+    @Test
+    void a_rewind_option_opens_as_the_machine_on_the_bench_and_evaluates_with_its_measured_resistance() {
+        Html planned = post("/rewind", formOf(get("/rewind", 200), "form[action=/rewind]"), 200);
+        Html form = get(planned.all("#reconnections td a").get(0).attr("href"), 200);
+        assertEquals("AXIAL_DUAL", form.selected("topology"), "the example's coils are air-cored");
+        Html results = post("/design", formOf(form, "main form"), 200);
+        // 1.45 Ω between two line leads of a star winding at 20 °C is 0.725 Ω a phase; the coils' mean turn is sized
+        // to it, so the evaluation's cold resistance is the measured one (to the 3 figures shown)
+        String note = results.id("hot-resistance").selectFirst(".note").text();
+        assertTrue(note.contains("(0.725 Ω at 20 °C)"), note);
+
+        Map<String, String> slotted = formOf(get("/rewind", 200), "form[action=/rewind]");
+        slotted.put("machine.slots", "36");
+        slotted.put("machine.poles", "4");
+        slotted.put("machine.measurements.measuredFrequencyHz", "10");
+        slotted.put("machine.layers", "DOUBLE");
+        slotted.put("machine.coilWindow.kind", "SLOTTED");
+        slotted.put("machine.turnsPerCoil", "20");
+        slotted.put("machine.measurements.lineResistanceOhm", "4.0");
+        Html motor = get(post("/rewind", slotted, 200).all("#reconnections td a").get(0).attr("href"), 200);
+        assertEquals("RADIAL_INNER", motor.selected("topology"), "a motor stator opens as a slotted radial machine");
+        assertEquals("36", motor.value("alternator.winding.slots"));
+        String motorNote = post("/design", formOf(motor, "main form"), 200).id("hot-resistance").selectFirst(".note").text();
+        // 4.0 Ω line is 2.0 Ω a phase; the guessed slots' end-turn span is estimated at mid-slot and the dimensions
+        // are written to 0.01 mm, so the stack that gives the measured turn is within 2 %
+        double cold = Double.parseDouble(motorNote.substring(motorNote.indexOf('(') + 1, motorNote.indexOf(" Ω at 20")));
+        assertEquals(2.0, cold, 0.04, motorNote);
+    }
+
     /** A saved design's input, by its group and label; empty when absent. */
     private static String input(Html page, String group, String label) {
         return page.all("#design-inputs table").stream().filter(t -> t.selectFirst("caption").text().equals(group))
@@ -264,6 +293,8 @@ class JourneyPagesTest {
         // common practice: in star the meter between two line leads reads two phases in series
         assertEquals(2 * rPhase, rLine, 0.01 * rLine);
         assertTrue(bench.id("leads").text().startsWith("Star (Y): join the finishes"));
+        assertTrue(bench.id("connection-sketch").selectFirst("title").text().startsWith("Star (Y)"), "the lead sketch is a star");
+        assertEquals(3, bench.id("connection-sketch").select("g[fill=#fff] circle").size(), "three line leads");
         assertFalse(bench.all(".phase-order li").isEmpty());
         assertFalse(bench.all("figure.unrolled").isEmpty());
 

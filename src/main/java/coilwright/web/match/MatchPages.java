@@ -66,7 +66,7 @@ public final class MatchPages {
     private void wind(Context ctx, Map<String, String> typed) {
         Units units = Units.of(ctx);
         open(ctx, "match-wind", typed, units);
-        WindPageForm f = forms.bind(FormBinder.single(typed), WindPageForm.class);
+        WindPageForm f = forms.bind(FormBinder.single(MatchFields.SHOWN.toSi(typed, units)), WindPageForm.class);
         EvaluationRequest design = DesignEdit.withLoad(alternator(typed), typed, units);
         WindMatchRequest req = new WindMatchRequest(design.alternator(), design.load(), f.rotor().toRotor(), f.site(),
                 f.wind(), 25.0);
@@ -75,7 +75,7 @@ public final class MatchPages {
                 design.alternator().ambientTempC()), Map.of(
                 "matchingChart", MatchCharts.windMatching(req.rotor(), result),
                 "powerChart", MatchCharts.windPowerCurve(result)));
-        model.put("ratedChoices", RatedSpeed.wind(result));
+        model.put("ratedChoices", RatedSpeed.wind(result, units));
         ctx.render("match-wind", model);
     }
 
@@ -94,7 +94,7 @@ public final class MatchPages {
     private void hydro(Context ctx, Map<String, String> typed) {
         Units units = Units.of(ctx);
         open(ctx, "match-hydro", typed, units);
-        HydroPageForm f = forms.bind(FormBinder.single(typed), HydroPageForm.class);
+        HydroPageForm f = forms.bind(FormBinder.single(MatchFields.SHOWN.toSi(typed, units)), HydroPageForm.class);
         EvaluationRequest design = DesignEdit.withLoad(alternator(typed), typed, units);
         HydroMatchResult result = matching.hydro(new HydroMatchRequest(design.alternator(), design.load(), f.site(),
                 f.penstock(), f.runner(), f.driveRatio(), f.drivetrainEfficiency(), f.waterTempC()));
@@ -112,7 +112,7 @@ public final class MatchPages {
         ExampleCatalogue.Example example = carried != null ? null
                 : example(Optional.ofNullable(ctx.queryParam("example")).orElse(fallbackExample));
         EvaluationRequest design = example == null ? CarriedDesign.decode(carried) : example.document().design();
-        Map<String, String> values = new LinkedHashMap<>(FormBinder.flatten(defaults));
+        Map<String, String> values = new LinkedHashMap<>(MatchFields.SHOWN.fromSi(FormBinder.flatten(defaults), units));
         values.put(TITLE, example == null ? Optional.ofNullable(ctx.queryParam(TITLE)).orElse("") : example.title());
         values.putAll(loadFields(DesignEdit.formValues(design, units)));
         values.put(CarriedDesign.FIELD, CarriedDesign.encode(design));
@@ -179,6 +179,8 @@ public final class MatchPages {
         m.put("form", form);
         m.put("examples", examples.all().stream().map(e -> new Choice(e.slug(), e.title())).toList());
         m.put("runnerKinds", Choice.names(RunnerKind.values()));
+        m.put("matchUnit", new MatchFields.Symbols(units));
+        m.put("unitHints", UnitHints.of(form.values(), units));
         String carried = form.value(CarriedDesign.FIELD);
         if (!carried.isBlank()) {
             try {
@@ -192,7 +194,7 @@ public final class MatchPages {
         return m;
     }
 
-    /** A form in a query, its load fields converted from the units they were typed in. */
+    /** A form in a query, its site, turbine and load fields converted from the units they were typed in. */
     private static Map<String, String> fields(Map<String, List<String>> query, Units units) {
         Map<String, String> typed = new LinkedHashMap<>();
         query.forEach((k, v) -> {
@@ -200,6 +202,8 @@ public final class MatchPages {
                 typed.put(k, v.isEmpty() ? "" : v.get(0).trim());
             }
         });
-        return new LinkedHashMap<>(DesignEdit.typedIn(typed, units));
+        String enteredIn = typed.get(DesignEdit.ENTERED_IN);
+        Units from = enteredIn == null ? units : Units.choose(enteredIn, null);
+        return new LinkedHashMap<>(DesignEdit.typedIn(MatchFields.SHOWN.convert(typed, from, units), units));
     }
 }

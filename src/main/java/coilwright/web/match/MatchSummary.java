@@ -7,6 +7,7 @@ import coilwright.system.WindMatchResult;
 import coilwright.web.Figure;
 import coilwright.web.Words;
 import coilwright.web.units.Fmt;
+import coilwright.web.units.Shown;
 import java.util.List;
 import java.util.Locale;
 
@@ -20,13 +21,14 @@ final class MatchSummary {
         return List.of(
                 Figure.of("air-density", "Air density", f("%.3f kg/m³", r.airDensityKgM3()), r.airDensitySource()),
                 Figure.of("cut-in", "Charging starts at", r.cutInWindSpeedMs().isPresent()
-                        ? f("%.1f m/s", r.cutInWindSpeedMs().getAsDouble()) : "never",
+                        ? fmt.shown(Shown.METRE_PER_SECOND, r.cutInWindSpeedMs().getAsDouble(), 3) : "never",
                         "once turning; the alternator's running drag (bearings, windage, iron, eddy currents) counted"),
                 Figure.of("charges-from-rest", "On a rising wind from rest, charging starts at",
-                        r.starting().chargesFromRestAtMs() > 0 ? f("%.1f m/s", r.starting().chargesFromRestAtMs())
-                                : "never", "the rotor must first break away, then reach cut-in"),
+                        r.starting().chargesFromRestAtMs() > 0
+                                ? fmt.shown(Shown.METRE_PER_SECOND, r.starting().chargesFromRestAtMs(), 3) : "never",
+                        "the rotor must first break away, then reach cut-in"),
                 Figure.of("starts-turning", "Starts turning from rest at",
-                        f("%.1f m/s", r.starting().startsTurningAtMs()),
+                        fmt.shown(Shown.METRE_PER_SECOND, r.starting().startsTurningAtMs(), 3),
                         f("against %.2f N·m of cogging and bearing friction", r.starting().coggingPeakNm()
                                 + r.starting().breakawayFrictionNm())),
                 Figure.of("annual-energy", "Annual energy to the battery", f("%.0f kWh", energy.annualEnergyKWh()),
@@ -48,10 +50,11 @@ final class MatchSummary {
         LossPoint h = r.heat();
         boolean hot = h.windingHotSpotC() > insulation.limitC();
         return List.of(
-                Figure.of("net-head", "Net head", f("%.2f m", p.netHeadM()), f("penstock efficiency %.1f %%; "
-                                + "Hazen-Williams friction %.2f m against Darcy-Weisbach %.2f m",
-                        100 * p.penstockEfficiency(), p.hazenWilliamsFrictionLossM(), p.frictionLossM())),
-                Figure.of("runner", "Runner", Words.of(r.runnerKind()) + f(", %.0f mm", 1000 * r.runnerDiameterM()),
+                Figure.of("net-head", "Net head", fmt.shown(Shown.METRE, p.netHeadM(), 3), f("penstock efficiency %.1f %%; "
+                        + "Hazen-Williams friction ", 100 * p.penstockEfficiency()) + fmt.shown(Shown.METRE,
+                        p.hazenWilliamsFrictionLossM(), 3) + " against Darcy-Weisbach " + fmt.shown(Shown.METRE,
+                        p.frictionLossM(), 3)),
+                Figure.of("runner", "Runner", Words.of(r.runnerKind()) + ", " + fmt.shown(Shown.MM, r.runnerDiameterM(), 3),
                         f("best speed %.0f rpm", r.optimumRunnerSpeedRpm())),
                 Figure.of("power", "Hydraulic / peak shaft power", f("%.0f W / %.0f W", r.hydraulicPowerW(),
                         r.peakShaftPowerW()), ""),

@@ -5,6 +5,8 @@ import coilwright.system.WindMatchPoint;
 import coilwright.system.WindMatchResult;
 import coilwright.web.Choice;
 import coilwright.web.units.Fmt;
+import coilwright.web.units.Shown;
+import coilwright.web.units.Units;
 import java.util.ArrayList;
 import java.util.List;
 
@@ -20,7 +22,7 @@ final class RatedSpeed {
     }
 
     /** Whole wind speeds that charge, in order, the usual rated wind speed (or the nearest below it) moved first. */
-    static List<Choice> wind(WindMatchResult r) {
+    static List<Choice> wind(WindMatchResult r, Units units) {
         List<Choice> out = new ArrayList<>();
         int usual = -1;
         for (WindMatchPoint p : r.points()) {
@@ -29,7 +31,7 @@ final class RatedSpeed {
                     usual = out.size();
                 }
                 out.add(new Choice(Fmt.plain(p.alternatorSpeedRpm(), 4), Fmt.plain(p.alternatorSpeedRpm(), 3)
-                        + " rpm, at " + Fmt.plain(p.windSpeedMs(), 3) + " m/s of wind (" + Fmt.plain(p.powerToBatteryW(), 3)
+                        + " rpm, at " + new Fmt(units).shown(Shown.METRE_PER_SECOND, p.windSpeedMs(), 3) + " of wind (" + Fmt.plain(p.powerToBatteryW(), 3)
                         + " W to the battery)"));
             }
         }

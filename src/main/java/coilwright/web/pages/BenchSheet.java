@@ -64,6 +64,7 @@ final class BenchSheet {
         m.put("build", build);
         m.put("check", check);
         m.put("leads", leads(spec.connection(), phases));
+        m.put("sketch", phases == 1 ? "single" : spec.connection() == Connection.STAR ? "star" : "delta");
         m.put("winding", WindingView.of(w));
         m.put("testRpm", Fmt.plain(testRpm, 4));
         return m;

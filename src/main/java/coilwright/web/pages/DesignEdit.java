@@ -16,6 +16,8 @@ import java.util.Map;
  * with the design form's conversions and messages.
  */
 public final class DesignEdit {
+    /** The query field naming the units a form's values were typed in (see {@link #unitsLink}). */
+    public static final String ENTERED_IN = DesignFormModel.ENTERED_IN;
     private static final DesignForm FORMS = new DesignForm();
 
     private DesignEdit() {

@@ -11,18 +11,21 @@ import coilwright.rewind.RewindOption;
 import coilwright.rewind.RewindPlan;
 import coilwright.rewind.RewindTarget;
 import coilwright.rewind.WireChoice;
+import coilwright.web.pages.DesignEdit;
 import coilwright.winding.Layers;
 import java.net.URLEncoder;
 import java.nio.charset.StandardCharsets;
 import java.util.LinkedHashMap;
 import java.util.Map;
+import java.util.OptionalDouble;
 import java.util.stream.Collectors;
 
 /**
  * Links from a rewind option to the design form ({@code GET /design/new}) with its values pre-filled as query
- * parameters named by the dotted paths of {@code EvaluationRequest}. The measured Ke (scaled to the option) goes in
- * {@code alternator.measuredKeLineVPerRpm}, so the evaluation uses it in place of a computed EMF; the rotor and stator
- * geometry of an existing machine is not known here and must be added on the form.
+ * parameters named by the dotted paths of {@code EvaluationRequest}, in the form's SI units ({@code enteredIn=si}: mm,
+ * mH, °C). The measured Ke (scaled to the option) goes in {@code alternator.measuredKeLineVPerRpm}, so the evaluation
+ * uses it in place of a computed EMF; the machine's dimensions are not known here, so {@link MachineGuess} opens it as
+ * the right kind of machine with magnets that fit and the mean turn the measured resistance implies.
  */
 public final class DesignLinks {
     /** The design form. */
@@ -32,10 +35,16 @@ public final class DesignLinks {
 
     private final ExistingMachine machine;
     private final RewindPlan plan;
+    private final boolean slotted;
 
-    DesignLinks(ExistingMachine machine, RewindPlan plan) {
+    /**
+     * @param slotted the coils sit in the slots of an iron stator (a radial machine), else they are air-cored coils
+     *                of an axial machine
+     */
+    DesignLinks(ExistingMachine machine, RewindPlan plan, boolean slotted) {
         this.machine = machine;
         this.plan = plan;
+        this.slotted = slotted;
     }
 
     /** The machine reconnected as the option says, with its present turns and wire. */
@@ -62,12 +71,20 @@ public final class DesignLinks {
         MachineCharacterisation ch = plan.characterisation();
         RewindTarget t = plan.target();
         Map<String, String> p = new LinkedHashMap<>();
+        p.put(DesignEdit.ENTERED_IN, "si");
         putWinding(p, machine.slots(), ch.poles(), machine.phases(), machine.layers(), ch.coilPitchSlots(), paths);
+        OptionalDouble meanTurnM = ch.meanTurnLengthM().map(b -> OptionalDouble.of(b.value())).orElse(OptionalDouble.empty());
+        if (slotted) {
+            MachineGuess.radial(p, machine.slots(), ch.coilPitchSlots(), meanTurnM, machine.layers(),
+                    turns * wire.strandsInHand() * wire.overallDiameterM() * wire.overallDiameterM());
+        } else {
+            MachineGuess.axial(p, machine.slots(), machine.layers(), ch.poles(), meanTurnM);
+        }
         p.put("alternator.turnsPerCoil", Integer.toString(turns));
         p.put("alternator.connection", conn.name());
         p.put("alternator.wire.gauge", wire.gauge().name());
         p.put("alternator.wire.awg", Integer.toString(wire.awg()));
-        p.put("alternator.wire.bareDiameterM", wire.gauge() == WireGauge.METRIC ? num(wire.bareDiameterM()) : "0");
+        p.put("alternator.wire.bareDiameterM", wire.gauge() == WireGauge.METRIC ? num(1000 * wire.bareDiameterM()) : "0");
         p.put("alternator.wire.insulationGrade", Integer.toString(wire.insulationGrade()));
         p.put("alternator.wire.strandsInHand", Integer.toString(wire.strandsInHand()));
         if (keLine <= MAX_MEASURED_KE) {
@@ -75,7 +92,7 @@ public final class DesignLinks {
         }
         ch.phaseInductanceH().ifPresent(l -> {
             double ratio = (double) seriesTurnsPerPhase / ch.seriesTurnsPerPhase();
-            p.put("alternator.phaseInductanceH", num(l.value() * ratio * ratio));
+            p.put("alternator.phaseInductanceH", num(1000 * l.value() * ratio * ratio));
         });
         p.put("alternator.windingTempC", num(t.windingTemperatureC()));
         p.put("ratedSpeedRpm", num(t.targetSpeedRpm()));

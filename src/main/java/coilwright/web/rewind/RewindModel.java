@@ -43,9 +43,15 @@ final class RewindModel {
         Map<String, Object> model = of(form, FormResult.showing(RewindForm.statorDefaults()));
         model.put("plan", plan);
         model.put("machine", request.machine());
-        model.put("links", new DesignLinks(request.machine(), plan));
+        model.put("links", new DesignLinks(request.machine(), plan, slotted(form, request)));
         model.put("sameStator", sameStator(request, service));
         return model;
+    }
+
+    /** The coils sit in slots: the window says so, or the form's window kind does when its area was left blank. */
+    private static boolean slotted(FormResult form, RewindRequest request) {
+        return request.machine().coilWindow().map(w -> w.kind() == coilwright.conductor.CoilWindow.Kind.SLOTTED)
+                .orElse("SLOTTED".equals(form.value("machine.coilWindow.kind")));
     }
 
     /** Other pole counts for the same stator, up to twice the slots (a magnet rotor for another speed). */

@@ -8,6 +8,9 @@ import coilwright.validation.FieldError;
 import coilwright.validation.InvalidInputException;
 import coilwright.web.Json;
 import coilwright.web.RecordBinder;
+import coilwright.web.pages.DesignEdit;
+import coilwright.web.units.Fmt;
+import coilwright.web.units.Units;
 import io.javalin.http.Context;
 import io.javalin.http.UploadedFile;
 
@@ -15,6 +18,7 @@ import java.io.IOException;
 import java.io.InputStream;
 import java.io.UncheckedIOException;
 import java.nio.charset.StandardCharsets;
+import java.util.List;
 
 /** The JSON API of saved designs: save, revise, read, export, import, recompute and compare. */
 public final class SavedDesignApi {
@@ -94,7 +98,13 @@ public final class SavedDesignApi {
 
     private void curves(Context ctx, SavedRevision r) {
         ctx.header("Content-Disposition", "attachment; filename=\"coilwright-" + r.revisionId() + "-curves.csv\"");
-        ctx.contentType("text/csv; charset=utf-8").result(CurvesCsv.of(library.tree(r.resultJson())));
+        String link = ctx.scheme() + "://" + ctx.host() + "/d/" + r.designId() + "/r/" + r.revisionId();
+        var design = library.document(r).design();
+        List<String> about = List.of("Coilwright operating points", "Title: " + r.title(), "Link: " + link,
+                "Revision: " + r.number() + " (" + r.revisionId() + ")",
+                "Units: SI, as each column header names them", "Saved: " + new Fmt(Units.SI).when(r.createdAt()),
+                "Machine: " + DesignEdit.describe(design) + "; rated speed " + Fmt.plain(design.effectiveRatedSpeedRpm(), 4) + " rpm");
+        ctx.contentType("text/csv; charset=utf-8").result(CurvesCsv.of(about, library.tree(r.resultJson())));
     }
 
     static String required(Context ctx, String name) {

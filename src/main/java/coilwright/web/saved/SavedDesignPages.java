@@ -9,6 +9,8 @@ import coilwright.system.EvaluationRequest;
 import coilwright.web.CarriedDesign;
 import coilwright.web.Json;
 import coilwright.web.NextSteps;
+import coilwright.service.EvaluationService;
+import coilwright.web.pages.DesignFigures;
 import coilwright.web.pages.DesignInputs;
 import coilwright.web.units.Units;
 import coilwright.web.NotFoundException;
@@ -28,10 +30,12 @@ import java.util.Optional;
 /** The pages of saved designs. Title and notes are user text: templates show them with th:text only. */
 public final class SavedDesignPages {
     private final DesignLibrary library;
+    private final EvaluationService evaluation;
     private final RecordBinder binder = new RecordBinder(Json.mapper());
 
-    public SavedDesignPages(DesignLibrary library) {
+    public SavedDesignPages(DesignLibrary library, EvaluationService evaluation) {
         this.library = library;
+        this.evaluation = evaluation;
     }
 
     public void newForm(Context ctx) {
@@ -87,8 +91,22 @@ public final class SavedDesignPages {
 
     public void print(Context ctx) {
         SavedRevision r = ofDesign(ctx);
-        ctx.render("saved-print", Map.of("rev", r, "results", ResultView.of(library.tree(r.resultJson())),
+        Map<String, Object> model = new HashMap<>(Map.of("rev", r, "results", ResultView.of(library.tree(r.resultJson())),
                 "inputs", DesignInputs.of(library.document(r).design(), Units.of(ctx))));
+        model.putAll(figures(r, library.recompute(r)));
+        ctx.render("saved-print", model);
+    }
+
+    /**
+     * The charts and winding layout of a saved input as this server computes them (a cached evaluation: recomputing
+     * already evaluated it), and whether they differ from the saved numbers. None when the tool cannot compute it.
+     */
+    private Map<String, Object> figures(SavedRevision r, Recomputation again) {
+        if (again.results().isEmpty()) {
+            return Map.of();
+        }
+        EvaluationRequest design = library.document(r).design();
+        return Map.of("figures", DesignFigures.of(evaluation.evaluate(design), design), "figuresDiffer", again.differs());
     }
 
     public void compare(Context ctx) {
@@ -96,7 +114,11 @@ public final class SavedDesignPages {
         String b = ctx.queryParam("b");
         Map<String, Object> model = new HashMap<>(Map.of("a", a == null ? "" : a, "b", b == null ? "" : b));
         if (a != null && !a.isBlank() && b != null && !b.isBlank()) {
-            model.put("comparison", Comparison.of(library, library.resolve(a.strip()), library.resolve(b.strip())));
+            SavedRevision first = library.resolve(a.strip());
+            SavedRevision second = library.resolve(b.strip());
+            model.put("comparison", Comparison.of(library, first, second));
+            CompareCurves.of(library.tree(first.resultJson()), library.tree(second.resultJson()))
+                    .ifPresent(svg -> model.put("overlay", svg));
         }
         ctx.render("saved-compare", model);
     }
@@ -117,6 +139,7 @@ public final class SavedDesignPages {
         model.put("inputs", DesignInputs.of(design, Units.of(ctx)));
         model.put("results", ResultView.of(recomputedView && again.results().isPresent() ? again.results().get()
                 : library.tree(r.resultJson())));
+        model.putAll(figures(r, again));
         ctx.render("saved-revision", model);
     }
 

@@ -13,6 +13,8 @@ public enum Quantity {
     SMALL_AREA("mm²", "in²", 25.4 * 25.4),
     SPEED("m/s", "mph", 0.44704),
     FLOW("m³/s", "US gpm", 3.785411784e-3 / 60.0),
+    /** Water flow as a stream is gauged: litres per second, or US gallons per minute. */
+    SMALL_FLOW("L/s", "US gpm", 3.785411784 / 60.0),
     MASS("kg", "lb", 0.45359237),
     TORQUE("N·m", "lbf·ft", 4.4482216152605 * 0.3048),
     POWER("W", "W", 1.0),

@@ -10,6 +10,10 @@ public enum Shown {
     MM(Quantity.SMALL_LENGTH, 1e-3, null),
     /** Metres shown as m (feet in imperial). */
     METRE(Quantity.LENGTH, 1.0, null),
+    /** Metres per second (miles per hour in imperial). */
+    METRE_PER_SECOND(Quantity.SPEED, 1.0, null),
+    /** Cubic metres per second shown as L/s (US gal/min in imperial). */
+    LITRE_PER_SECOND(Quantity.SMALL_FLOW, 1e-3, null),
     /** Square metres shown as mm² in both systems (cable is sold by mm² or AWG, never by in²). */
     MM2(null, 1e-6, "mm²"),
     /** Square metres of copper in a conductor shown as mm² (square inches in imperial). */

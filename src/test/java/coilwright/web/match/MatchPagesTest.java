@@ -8,6 +8,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import coilwright.web.Html;
 import coilwright.web.TestApp;
+import io.restassured.response.Response;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
@@ -128,15 +129,15 @@ class MatchPagesTest {
         Map<String, String> f = new HashMap<>();
         f.put("example", "radial-hydro-48v");
         f.put("site.grossHeadM", "28");
-        f.put("site.designFlowM3s", "0.012");
+        f.put("site.designFlowM3s", "12");
         f.put("site.flowDuration", "");
-        f.put("site.flowDuration[0].flowM3s", "0.02");
+        f.put("site.flowDuration[0].flowM3s", "20");
         f.put("site.flowDuration[0].percentOfTime", "0");
-        f.put("site.flowDuration[1].flowM3s", "0.006");
+        f.put("site.flowDuration[1].flowM3s", "6");
         f.put("site.flowDuration[1].percentOfTime", "100");
         f.put("penstock.lengthM", "150");
-        f.put("penstock.innerDiameterM", "0.09");
-        f.put("penstock.roughnessM", "0.0000015");
+        f.put("penstock.innerDiameterM", "90");
+        f.put("penstock.roughnessM", "0.0015");
         f.put("penstock.hazenWilliamsC", "150");
         f.put("penstock.sumMinorLossK", "2.5");
         f.put("runner.kind", "IMPULSE");
@@ -177,5 +178,110 @@ class MatchPagesTest {
         assertTrue(page.error("site.grossHeadM").startsWith("site.grossHeadM = 300"), page.error("site.grossHeadM"));
         assertTrue(page.error("site.grossHeadM").contains("CROSSFLOW runner"));
         assertEquals("CROSSFLOW", page.selected("runner.kind"));
+    }
+
+    private static Html get(String pathAndQuery) {
+        return Html.of(given().urlEncodingEnabled(false).get(pathAndQuery).then().statusCode(200)
+                .contentType(startsWith("text/html")).extract().response());
+    }
+
+    @Test
+    void the_hydro_form_asks_for_the_stream_in_litres_per_second_and_the_pipe_in_millimetres() {
+        Html page = get("/match/hydro");
+        assertEquals("12", page.value("site.designFlowM3s"));
+        assertEquals("L/s", page.unit("site.designFlowM3s"));
+        assertEquals("L/s", page.unit("site.flowDuration[0].flowM3s"));
+        assertEquals("90", page.value("penstock.innerDiameterM"));
+        assertEquals("mm", page.unit("penstock.innerDiameterM"));
+        assertEquals("0.0015", page.value("penstock.roughnessM"));
+        assertEquals("m", page.unit("site.grossHeadM"));
+    }
+
+    @Test
+    void in_imperial_the_match_forms_take_feet_miles_per_hour_and_gallons_per_minute() {
+        Html hydro = get("/match/hydro?units=imperial");
+        // 28 m / 0.3048 = 91.8635 ft; 12 L/s / 0.0630901964 = 190.204 US gpm; 90 mm / 25.4 = 3.54331 in (NIST SP 811)
+        assertEquals("91.8635", hydro.value("site.grossHeadM"));
+        assertEquals("ft", hydro.unit("site.grossHeadM"));
+        assertEquals("190.204", hydro.value("site.designFlowM3s"));
+        assertEquals("US gpm", hydro.unit("site.designFlowM3s"));
+        assertEquals("3.54331", hydro.value("penstock.innerDiameterM"));
+        assertEquals("in", hydro.unit("penstock.innerDiameterM"));
+        assertEquals("50", hydro.value("waterTempC"), "10 °C is 50 °F");
+        Html wind = get("/match/wind?units=imperial");
+        assertEquals("7.87402", wind.value("rotor.diameterM"), "2.4 m rotor in feet");
+        assertEquals("11.1847", wind.value("wind.meanWindSpeedMs"), "5 m/s in mph");
+        assertEquals("mph", wind.unit("wind.meanWindSpeedMs"));
+    }
+
+    @Test
+    void an_imperial_hydro_form_is_matched_as_the_same_stream_in_si() {
+        Html si = post("/match/hydro", hydroForm(), 200);
+        Map<String, String> f = hydroForm();
+        f.put("site.grossHeadM", "91.8635");
+        f.put("site.designFlowM3s", "190.204");
+        f.put("site.flowDuration[0].flowM3s", "317.006");
+        f.put("site.flowDuration[1].flowM3s", "95.1019");
+        f.put("penstock.lengthM", "492.126");
+        f.put("penstock.innerDiameterM", "3.54331");
+        f.put("penstock.roughnessM", "0.0000590551");
+        f.put("waterTempC", "50");
+        Html imperial = Html.of(given().cookie("coilwright-units", "imperial").formParams(f).post("/match/hydro")
+                .then().statusCode(200).extract().response());
+        String speed = si.id("matched-speed").selectFirst(".value").text();
+        assertEquals(speed, imperial.id("matched-speed").selectFirst(".value").text());
+        assertTrue(imperial.id("net-head").selectFirst(".value").text().endsWith(" ft"),
+                imperial.id("net-head").selectFirst(".value").text());
+        assertEquals("190.204", imperial.value("site.designFlowM3s"), "the form keeps what was typed");
+    }
+
+    @Test
+    void the_units_switch_on_a_hydro_result_converts_what_was_typed_and_keeps_the_result() {
+        Html si = post("/match/hydro", hydroForm(), 200);
+        String imperialLink = si.doc().select(".units-switch a").get(1).attr("href");
+        Html imperial = get(imperialLink);
+        assertEquals("190.204", imperial.value("site.designFlowM3s"));
+        assertEquals("3.54331", imperial.value("penstock.innerDiameterM"));
+        assertEquals(si.id("matched-speed").selectFirst(".value").text(),
+                imperial.id("matched-speed").selectFirst(".value").text());
+        Html back = get(imperial.doc().select(".units-switch a").get(0).attr("href"));
+        assertEquals("12", back.value("site.designFlowM3s"), "and back to L/s as typed");
+    }
+
+    @Test
+    void a_stream_typed_in_cubic_metres_a_second_gets_a_hint_with_the_litres_probably_meant() {
+        Map<String, String> f = hydroForm();
+        f.put("site.designFlowM3s", "0.012");
+        f.put("penstock.innerDiameterM", "0.09");
+        Response r = given().formParams(f).post("/match/hydro");
+        Html page = Html.of(r);
+        assertEquals("0.012 L/s is unusual here: if it was in m³/s, did you mean 12 L/s?",
+                page.id("site.designFlowM3s-hint").text());
+        assertEquals("0.09 mm is unusual here: if it was in m, did you mean 90 mm?",
+                page.id("penstock.innerDiameterM-hint").text());
+        assertEquals("0.012", page.value("site.designFlowM3s"), "nothing is changed behind the user's back");
+        Html ordinary = post("/match/hydro", hydroForm(), 200);
+        assertTrue(ordinary.all(".unit-hint").isEmpty(), "12 L/s and 90 mm need no hint");
+    }
+
+    @Test
+    void a_rotor_typed_in_millimetres_gets_a_hint() {
+        Map<String, String> f = windForm();
+        f.put("rotor.diameterM", "2400");
+        Html page = Html.of(given().formParams(f).post("/match/wind"));
+        assertEquals("2400 m is unusual here: if it was in mm, did you mean 2.4 m?", page.id("rotor.diameterM-hint").text());
+    }
+
+    @Test
+    void a_number_too_large_for_a_double_is_refused_under_its_field_in_either_units() {
+        Map<String, String> f = hydroForm();
+        f.put("site.designFlowM3s", "1e999");
+        Html page = post("/match/hydro", f, 400);
+        assertTrue(page.error("site.designFlowM3s").startsWith("site.designFlowM3s"), page.error("site.designFlowM3s"));
+        Map<String, String> w = windForm();
+        w.put("rotor.diameterM", "1e999");
+        assertTrue(post("/match/wind", w, 400).error("rotor.diameterM").startsWith("rotor.diameterM"));
+        given().urlEncodingEnabled(true).queryParam("rotor.diameterM", "1e999").queryParam("enteredIn", "si")
+                .queryParam("units", "imperial").get("/match/wind").then().statusCode(400);
     }
 }

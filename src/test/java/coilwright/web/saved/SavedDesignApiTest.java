@@ -216,10 +216,20 @@ class SavedDesignApiTest {
         csv.then().statusCode(200).contentType(startsWith("text/csv"))
                 .header("Content-Disposition", equalTo("attachment; filename=\"coilwright-" + rev + "-curves.csv\""));
         String text = csv.asString();
-        assertTrue(text.startsWith("Speed (rpm),Frequency (Hz),Phase EMF (V rms),Line EMF (V rms),"), text);
-        assertTrue(text.contains("Power to load (W)") && text.contains("Current density (A/mm^2)"), text);
-        assertEquals(22, text.split("\r\n", -1).length - 1, "CRLF after the header and each of 21 rows");
-        List<CSVRecord> rows = CSVFormat.RFC4180.builder().setHeader().setSkipHeaderRecord(true).get()
+        List<String> about = text.lines().takeWhile(l -> l.startsWith("# ")).toList();
+        assertEquals("# Coilwright operating points", about.get(0));
+        assertTrue(about.contains("# Title: Curves"), about.toString());
+        assertTrue(about.stream().anyMatch(l -> l.matches("# Link: http://127\\.0\\.0\\.1:\\d+/d/" + saved.path("designId")
+                + "/r/" + rev)), about.toString());
+        assertTrue(about.contains("# Revision: 1 (" + rev + ")") && about.contains("# Units: SI, as each column header names them"),
+                about.toString());
+        assertTrue(about.stream().anyMatch(l -> l.matches("# Saved: \\d{4}-\\d\\d-\\d\\d \\d\\d:\\d\\d UTC")), about.toString());
+        assertTrue(about.stream().anyMatch(l -> l.startsWith("# Machine: ") && l.contains("turns per coil")), about.toString());
+        String table = text.substring(text.indexOf("Speed (rpm)"));
+        assertTrue(table.startsWith("Speed (rpm),Frequency (Hz),Phase EMF (V rms),Line EMF (V rms),"), text);
+        assertTrue(table.contains("Power to load (W)") && table.contains("Current density (A/mm^2)"), text);
+        assertEquals(22, table.split("\r\n", -1).length - 1, "CRLF after the header and each of 21 rows");
+        List<CSVRecord> rows = CSVFormat.RFC4180.builder().setCommentMarker('#').setHeader().setSkipHeaderRecord(true).get()
                 .parse(new StringReader(text)).getRecords();
         assertEquals(21, rows.size());
         List<Double> speeds = given().get("/api/v1/revisions/" + rev).path("results.points.speedRpm");

@@ -23,6 +23,7 @@ import static org.hamcrest.Matchers.equalTo;
 import static org.hamcrest.Matchers.hasSize;
 import static org.hamcrest.Matchers.not;
 import static org.hamcrest.Matchers.startsWith;
+import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
@@ -168,6 +169,8 @@ class SavedDesignPagesTest {
         assertTrue(page.contains("computed by version 0.0.1-old"), page);
         assertTrue(page.contains("/d/" + o.designId() + "/r/" + o.revisionId() + "/recomputed"), page);
         assertTrue(page.contains("<span class=\"value\">999</span>"), "the saved power is shown");
+        assertTrue(page.contains("Drawn from the saved input as this server computes it today"),
+                "the charts say they are not the saved numbers");
         given().get("/d/" + o.designId() + "/r/" + o.revisionId() + "/recomputed").then().statusCode(200)
                 .body(containsString("You are looking at a recomputation")).body(not(containsString("<span class=\"value\">999</span>")));
         given().get("/api/v1/revisions/" + o.revisionId() + "/recomputed").then().statusCode(200)
@@ -183,7 +186,30 @@ class SavedDesignPagesTest {
                 .body(containsString("<code>design.alternator.turnsPerCoil</code>"))
                 .body(containsString("<mark>30</mark>")).body(containsString("<mark>33</mark>"))
                 .body(containsString("(differs)"));
+        coilwright.web.Html page = coilwright.web.Html.of(given().get("/compare?a=" + a + "&b=" + b).then().extract().response());
+        String overlay = page.id("compare-curves").text();
+        assertTrue(overlay.contains("Power to load, first") && overlay.contains("Power to load, second")
+                && overlay.contains("Open-circuit EMF, second"), overlay);
         given().get("/compare?a=" + a + "&b=" + a).then().statusCode(200).body(containsString("No differences"));
         given().get("/compare").then().statusCode(200).body(containsString("name=\"a\""));
+    }
+
+    @Test
+    void the_saved_page_and_its_print_view_show_the_charts_and_the_winding_layout_before_the_long_table() {
+        Response saved = saveApi(SavedFixtures.document("Drawn for the client", "", 36));
+        String id = saved.path("designId");
+        String rev = saved.path("revisionId");
+        for (String path : List.of("/d/" + id, "/d/" + id + "/r/" + rev + "/print")) {
+            coilwright.web.Html page = coilwright.web.Html.of(given().get(path).then().statusCode(200).extract().response());
+            assertEquals(3, page.all("#design-charts .chart svg").size(), path);
+            assertFalse(page.all("#design-winding .unrolled svg").isEmpty(), path + ": the unrolled winding");
+            assertTrue(page.has("design-inputs"), path);
+            String html = page.doc().html();
+            assertTrue(html.indexOf("id=\"design-inputs\"") < html.indexOf("id=\"design-charts\"")
+                    && html.indexOf("id=\"design-charts\"") < html.indexOf("id=\"saved-points\""),
+                    path + ": inputs, then charts, then the operating-point table");
+            assertFalse(page.text().contains("Drawn from the saved input as this server computes it today"),
+                    path + ": the saved numbers are this server's");
+        }
     }
 }

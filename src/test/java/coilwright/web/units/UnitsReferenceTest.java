@@ -44,6 +44,16 @@ class UnitsReferenceTest {
     }
 
     @Test
+    @DisplayName("1 US gpm = 0.0630901964 L/s (NIST SP 811 B.8: US gal = 3.785411784 L); a stream of 12 L/s is 190.204 gpm")
+    void litresPerSecondAndGallonsPerMinute() {
+        assertEquals(0.0630901964, Quantity.SMALL_FLOW.fromImperial(1.0), 1e-12);
+        assertEquals(0.012, Shown.LITRE_PER_SECOND.toSi(190.20388, Units.IMPERIAL), 1e-9);
+        assertEquals(12.0, Shown.LITRE_PER_SECOND.fromSi(0.012, Units.SI), EXACT);
+        assertEquals("L/s", Shown.LITRE_PER_SECOND.symbol(Units.SI));
+        assertEquals("US gpm", Shown.LITRE_PER_SECOND.symbol(Units.IMPERIAL));
+    }
+
+    @Test
     @DisplayName("1 lbf·ft = 1.355818 N·m (NIST SP 811 B.8, lbf = 4.4482216152605 N)")
     void poundForceFoot() {
         assertEquals(1.355818, Quantity.TORQUE.fromImperial(1.0), 1e-6);
