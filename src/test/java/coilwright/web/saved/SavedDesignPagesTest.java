@@ -202,7 +202,8 @@ class SavedDesignPagesTest {
         for (String path : List.of("/d/" + id, "/d/" + id + "/r/" + rev + "/print")) {
             coilwright.web.Html page = coilwright.web.Html.of(given().get(path).then().statusCode(200).extract().response());
             assertEquals(3, page.all("#design-charts .chart svg").size(), path);
-            assertFalse(page.all("#design-winding .unrolled svg").isEmpty(), path + ": the unrolled winding");
+            assertFalse(page.all(path.endsWith("/print") ? "#design-winding .unrolled svg" : "#design-winding .unrolled img")
+                    .isEmpty(), path + ": the unrolled winding (inline when printed, an image on the page)");
             assertTrue(page.has("design-inputs"), path);
             String html = page.doc().html();
             assertTrue(html.indexOf("id=\"design-inputs\"") < html.indexOf("id=\"design-charts\"")
