@@ -29,6 +29,9 @@ import java.util.regex.Pattern;
 final class SizingForm {
     static final String DRIVE = "driveType";
     static final String BUILD = "buildType";
+    /** Hydro: the flow-duration curve as "flow@percent" pairs, the flow in the form's flow unit. */
+    static final String FLOW_DURATION = "flowDuration";
+    private static final Pattern PAIR = Pattern.compile("\\s*([^@\\s]+)\\s*@\\s*([^@\\s]+)\\s*");
     private static final Pattern LIST_SEPARATOR = Pattern.compile("[,;\\s]+");
     private static final JsonNodeFactory NODES = JsonNodeFactory.instance;
 
@@ -120,7 +123,8 @@ final class SizingForm {
             new Field("penstockLengthM", "drive.penstock.lengthM", Unit.METRE),
             new Field("penstockDiameterMm", "drive.penstock.innerDiameterM", Unit.MM),
             new Field("runnerRpm", "drive.runner.targetSpeedRpm", Unit.RPM),
-            new Field("driveRatio", "drive.driveRatio", Unit.NONE));
+            new Field("driveRatio", "drive.driveRatio", Unit.NONE),
+            new Field(FLOW_DURATION, "drive.site.flowDuration", Unit.LITRE_PER_S, true));
     private static final List<Field> AXIAL = List.of(
             new Field("discDiameterMm", "build.discDiametersM", Unit.MM),
             new Field("coilThicknessMm", "build.coilLayerThicknessesM", Unit.MM));
@@ -172,6 +176,7 @@ final class SizingForm {
         v.put("penstockDiameterMm", "100");
         v.put("runnerRpm", "375");
         v.put("driveRatio", "2");
+        v.put(FLOW_DURATION, "30@0, 15@30, 10@60, 6@90, 4@100");
         v.put("chemistry", "LEAD_ACID");
         v.put("batteryV", "24");
         v.put("cableLengthM", "30");
@@ -240,6 +245,10 @@ final class SizingForm {
                 if (text == null || !f.unit().converts()) {
                     continue;
                 }
+                if (f.name().equals(FLOW_DURATION)) {
+                    out.put(f.name(), convertPairs(text, f.unit(), from, to));
+                    continue;
+                }
                 List<String> parts = new ArrayList<>();
                 for (String part : LIST_SEPARATOR.split(text.trim())) {
                     try {
@@ -257,6 +266,27 @@ final class SizingForm {
             }
         }
         return out;
+    }
+
+    /** Flow-duration pairs with each flow converted; the text as typed when a pair cannot be read. */
+    private static String convertPairs(String text, Unit unit, Units from, Units to) {
+        List<String> out = new ArrayList<>();
+        for (String pair : text.split("[,;]")) {
+            java.util.regex.Matcher m = PAIR.matcher(pair);
+            if (pair.isBlank()) {
+                continue;
+            }
+            try {
+                if (!m.matches()) {
+                    return text;
+                }
+                double flow = unit.fromSi(unit.toSi(Double.parseDouble(m.group(1)), from), to);
+                out.add(Fmt.plain(flow, 5) + "@" + m.group(2));
+            } catch (NumberFormatException e) {
+                return text;
+            }
+        }
+        return String.join(", ", out);
     }
 
     /**
@@ -303,7 +333,7 @@ final class SizingForm {
             for (Field f : group) {
                 String shown = f.unit().symbol(units);
                 boolean differs = f.unit().toSi != 1 && f.unit().toSi > 0 || units == Units.IMPERIAL && f.unit().converts();
-                if (f.name().equals(name) && differs && !shown.isEmpty()) {
+                if (f.name().equals(name) && differs && !shown.isEmpty() && !name.equals(FLOW_DURATION)) {
                     return new FieldError(e.field(), e.value(), typed.getOrDefault(name, "") + " " + shown
                             + " is out of range (the request in SI units: " + e.message() + ")", e.allowed());
                 }
@@ -367,6 +397,10 @@ final class SizingForm {
     }
 
     private static void put(ObjectNode tree, Field f, String text, Units units, List<FieldError> errors) {
+        if (f.name().equals(FLOW_DURATION) && text.isEmpty()) {
+            ((ObjectNode) tree.at("/drive/site")).putArray("flowDuration");
+            return;
+        }
         if (f.optional() && (text.isEmpty() || text.matches("0+(\\.0*)?"))) {
             return;
         }
@@ -387,6 +421,10 @@ final class SizingForm {
             return;
         }
         boolean list = f.path().endsWith("sM") && (f.path().contains("discDiameters") || f.path().contains("Thicknesses"));
+        if (f.name().equals(FLOW_DURATION)) {
+            pairs(parent.putArray(leaf), f, text, units, errors);
+            return;
+        }
         try {
             if (list) {
                 ArrayNode values = parent.putArray(leaf);
@@ -407,6 +445,28 @@ final class SizingForm {
         }
     }
 
+    /** "flow@percent" pairs, separated by commas or semicolons, to the request's flow-duration points. */
+    private static void pairs(ArrayNode points, Field f, String text, Units units, List<FieldError> errors) {
+        for (String pair : text.split("[,;]")) {
+            if (pair.isBlank()) {
+                continue;
+            }
+            java.util.regex.Matcher m = PAIR.matcher(pair);
+            try {
+                if (!m.matches()) {
+                    throw new NumberFormatException(pair);
+                }
+                points.addObject().put("flowM3s", f.unit().toSi(Double.parseDouble(m.group(1)), units))
+                        .put("percentOfTime", Double.parseDouble(m.group(2)));
+            } catch (NumberFormatException e) {
+                errors.add(new FieldError(f.name(), text, f.name() + " = " + text + ": must be pairs of flow@percent "
+                        + "of the year, separated by commas, e.g. 30@0, 15@30, 10@60, 6@90, 4@100",
+                        "flow@percent pairs, percent 0 to 100 increasing"));
+                return;
+            }
+        }
+    }
+
     /** Everything the form does not ask for: common-practice choices of a small home-built machine. */
     private static ObjectNode skeleton(boolean wind, boolean axial, Map<String, String> typed) {
         ObjectNode t = NODES.objectNode();
@@ -420,7 +480,7 @@ final class SizingForm {
             drive.putObject("wind").put("weibullShapeK", 2.0);
         } else {
             drive.put("type", "HydroDrive").put("drivetrainEfficiency", 0.95).put("waterTempC", 10);
-            drive.putObject("site").putArray("flowDuration");
+            drive.putObject("site");
             drive.putObject("penstock").put("roughnessM", 1.5e-6).put("hazenWilliamsC", 150).put("sumMinorLossK", 2.0);
             drive.putObject("runner").put("kind", "IMPULSE").put("jetCount", 2).put("diameterM", 0)
                     .put("peakEfficiency", 0);

@@ -87,7 +87,10 @@ public final class SizingPage {
         return URLEncoder.encode(s, StandardCharsets.UTF_8);
     }
 
-    /** {@code GET /sizing/jobs/{jobId}}: progress, refreshed every 2 s, then the designs. */
+    /**
+     * {@code GET /sizing/jobs/{jobId}}: progress, refreshed every 2 s, then the designs; with {@code ?live=1} (asked
+     * for by the progress script, which follows the job's events) without the refresh.
+     */
     public void job(Context ctx) {
         String id = ctx.pathParam("jobId");
         SizingJob job = jobs.find(id).orElseThrow(() -> new NotFoundException("There is no design search " + id
@@ -96,7 +99,8 @@ public final class SizingPage {
         Map<String, Object> model = model(units, FormResult.showing(SizingForm.defaults()));
         model.put("job", job);
         model.put("percent", Math.round(100 * job.fraction()));
-        if (!job.finished()) {
+        if (!job.finished() && !"1".equals(ctx.queryParam("live"))) {
+            // without script the page reloads itself; the progress script asks for ?live=1 and follows the events
             ctx.header("Refresh", "2");
         } else if (job.result().isPresent()) {
             jobs.requestOf(id).ifPresent(r -> model.putAll(SizingView.of(r, job.result().get(), units)));
