@@ -70,9 +70,7 @@ public final class SizingSearch {
         Refiner.Best best = refiner.best(screen.survivors, request.resultCount(), request.maxFullEvaluations());
         // the front has a budget of its own, and reuses every evaluation made for the ranking
         Refiner.Front front = refiner.front(screen.survivors, refiner.evaluated() + request.maxFullEvaluations());
-        List<Long> shown = new ArrayList<>(best.candidates());
-        shown.addAll(front.candidates());
-        refiner.reported(shown);
+        refiner.reported(best.candidates());
         List<SizedDesign> designs = new ArrayList<>();
         for (int i = 0; i < best.candidates().size(); i++) {
             designs.add(design(p, refiner, best.candidates().get(i), i + 1));

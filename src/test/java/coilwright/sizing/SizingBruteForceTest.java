@@ -189,6 +189,33 @@ class SizingBruteForceTest {
         }
     }
 
+    /**
+     * The wind energy bound (per row, the bridge's current at the top speed against the rotor's best power above the
+     * cut-in) is at least the full model's energy for every candidate that charges, and within a quarter of it for
+     * the best one.
+     */
+    @Test
+    void the_wind_energy_bound_holds_for_every_candidate_and_is_tight_at_the_best() {
+        BruteForce all = new BruteForce(SizingFixtures.smallAxialWind(Objective.ANNUAL_ENERGY), POOL);
+        int checked = 0;
+        for (long c = 0; c < all.size; c++) {
+            FullEvaluation f = all.full(c);
+            if (f.built() && f.charges()) {
+                double bound = all.prepared.scoring().scoreBound(all.screen(c));
+                assertTrue(bound >= f.annualEnergyKWh(), "candidate " + c + ": bound " + bound + " < "
+                        + f.annualEnergyKWh());
+                checked++;
+            }
+        }
+        assertTrue(checked > 10, "candidates that charge");
+        long best = all.best(1).get(0);
+        double ratio = all.prepared.scoring().scoreBound(all.screen(best)) / all.full(best).annualEnergyKWh();
+        assertTrue(ratio < TIGHT_AT_BEST, "bound over energy at the best: " + ratio);
+    }
+
+    /** How far above the best design's energy its bound may be. */
+    private static final double TIGHT_AT_BEST = 1.25;
+
     @Test
     void the_pareto_front_is_the_brute_force_front() {
         SizingRequest req = SizingFixtures.smallRadialSpeed(Objective.OUTPUT_AT_RATED, new Limits(6, 0, 0, 0, 0));
