@@ -19,11 +19,18 @@ import java.util.OptionalDouble;
  * @param magnetMassKg                magnets, kg
  * @param materialCost                copper and magnets at the prices given (0 when none were given)
  * @param annualEnergyKWh             energy into the battery per year, kWh; empty when the drive gives none
+ * @param ratedWindingHotSpotC        steady hot spot of the winding at the rated point (thermal model, still air at
+ *                                    25 C), C; empty when it was not worked out
+ * @param coggingPeakNm               peak cogging torque, N m (0 for an air-cored stator)
+ * @param coggingPercentOfRatedTorque the peak cogging torque as a percentage of the shaft torque at the rated point;
+ *                                    empty when no torque is taken there or cogging was not worked out
  */
 public record DesignFigures(double cutInSpeedRpm, OptionalDouble cutInWindSpeedMs, double ratedSpeedRpm,
                             double ratedPowerW, double ratedEfficiency, double ratedCurrentDensityAPerMm2,
                             double fill, double openCircuitLineRmsV, double maxSpeedRpm, double copperMassKg,
-                            double magnetMassKg, double materialCost, OptionalDouble annualEnergyKWh) {
+                            double magnetMassKg, double materialCost, OptionalDouble annualEnergyKWh,
+                            OptionalDouble ratedWindingHotSpotC, double coggingPeakNm,
+                            OptionalDouble coggingPercentOfRatedTorque) {
 
     static DesignFigures of(FullEvaluation f, SizingRequest req, boolean energy) {
         boolean wind = req.drive() instanceof WindDrive;
@@ -32,7 +39,11 @@ public record DesignFigures(double cutInSpeedRpm, OptionalDouble cutInWindSpeedM
                         : OptionalDouble.empty(), f.ratedSpeedRpm(), f.ratedPowerW(), f.ratedEfficiency(),
                 f.ratedCurrentDensityAPerMm2(), f.fill(), f.openCircuitLineRmsV(), f.maxSpeedRpm(), f.copperMassKg(),
                 f.magnetMassKg(), f.cost(req.prices()),
-                energy ? OptionalDouble.of(f.annualEnergyKWh()) : OptionalDouble.empty());
+                energy ? OptionalDouble.of(f.annualEnergyKWh()) : OptionalDouble.empty(),
+                Double.isNaN(f.ratedWindingHotSpotC()) ? OptionalDouble.empty()
+                        : OptionalDouble.of(f.ratedWindingHotSpotC()), f.coggingPeakNm(),
+                Double.isFinite(f.coggingPercentOfRated()) && !Double.isNaN(f.ratedWindingHotSpotC())
+                        ? OptionalDouble.of(f.coggingPercentOfRated()) : OptionalDouble.empty());
     }
 
     /** Copper plus magnet mass, kg. */

@@ -38,6 +38,23 @@ interface DriveModel {
         return constants().batteryV() / constants().thresholdV();
     }
 
+    /**
+     * An upper bound of the alternator's shaft torque at the rated point, N m; infinite where none is known. Where
+     * the rated point is matched to a turbine, the shaft takes at most the turbine's largest power above the cut-in
+     * speed, and turns at least at the cut-in speed whenever current flows (with none flowing the torque is 0).
+     */
+    default double ratedShaftTorqueBoundNm(ScreenValues s) {
+        return Double.POSITIVE_INFINITY;
+    }
+
+    /** Shaft torque at most a shaft power can give at or above a speed, N m, widened for rounding. */
+    static double torqueBoundNm(double shaftPowerBoundW, double lowestSpeedRpm) {
+        if (lowestSpeedRpm <= 0) {
+            return Double.POSITIVE_INFINITY;
+        }
+        return shaftPowerBoundW / (lowestSpeedRpm * Math.PI / 30) * (1 + Scoring.WIDENING) + 1e-12;
+    }
+
     /** An upper bound of the power into the battery at the rated point, W. */
     double ratedPowerBoundW(ScreenValues s);
 

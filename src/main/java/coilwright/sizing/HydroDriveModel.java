@@ -127,6 +127,17 @@ final class HydroDriveModel implements DriveModel {
     }
 
     @Override
+    public double ratedShaftTorqueBoundNm(ScreenValues s) {
+        double lowestRunnerRpm = s.cutInRpm * (1 - Limit.SCREEN_MARGIN) / drive.driveRatio();
+        if (lowestRunnerRpm >= designRunner.runawaySpeedRpm()) {
+            return 0;
+        }
+        double shaftW = drive.drivetrainEfficiency()
+                * designRunner.powerW(Math.max(lowestRunnerRpm, designRunner.optimumSpeedRpm()));
+        return DriveModel.torqueBoundNm(shaftW, s.cutInRpm * (1 - Limit.SCREEN_MARGIN));
+    }
+
+    @Override
     public double energyBoundKWh(ScreenValues s) {
         double sum = 0;
         for (int i = 0; i < flowRunners.length; i++) {
@@ -180,9 +191,7 @@ final class HydroDriveModel implements DriveModel {
                     r.runawayAlternatorSpeedRpm(), r.cautions());
         }
         SpeedPoint rated = AlternatorEvaluator.point(alt, load, m.alternatorSpeedRpm());
-        return new FullEvaluation(alt.spec(), "", true, cutIn, 0, rated.speedRpm(), rated.powerToLoadW(),
-                rated.efficiency(), rated.currentDensityAPerMm2(), FullEvaluation.fillOf(alt),
-                r.openCircuitLineRmsVAtRunaway(), r.runawayAlternatorSpeedRpm(), alt.copperMassKg(),
-                alt.magnetMassKg(), r.annualEnergyKWh().orElse(0), r.cautions());
+        return FullEvaluation.of(alt, true, cutIn, 0, rated, r.openCircuitLineRmsVAtRunaway(),
+                r.runawayAlternatorSpeedRpm(), r.annualEnergyKWh().orElse(0), r.cautions());
     }
 }

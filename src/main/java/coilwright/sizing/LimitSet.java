@@ -2,10 +2,12 @@ package coilwright.sizing;
 
 import coilwright.conductor.FillCheck;
 import coilwright.safety.Cautions;
+import coilwright.thermal.CoolingConditions;
 
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
+import java.util.Map;
 
 /**
  * The limits of a search in the order the screen tries them (cheapest and most often binding first), with their
@@ -15,10 +17,13 @@ import java.util.Locale;
  * @param applied  as reported to the user
  * @param notes    defaults taken and why
  */
-record LimitSet(List<Limit> limits, List<AppliedLimit> applied, List<String> notes) {
+record LimitSet(List<Limit> limits, List<AppliedLimit> applied, List<String> notes, boolean needsMachineFigures) {
     private static final double SQRT2 = Math.sqrt(2);
 
-    static LimitSet of(SizingRequest req, DriveModel drive, LoadConstants lc) {
+    /**
+     * @param layouts the search's layouts (for the cogging of each, worked out once)
+     */
+    static LimitSet of(SizingRequest req, DriveModel drive, LoadConstants lc, List<Layout> layouts) {
         Limits l = req.limits();
         List<Limit> out = new ArrayList<>();
         List<String> notes = new ArrayList<>();
@@ -28,25 +33,74 @@ record LimitSet(List<Limit> limits, List<AppliedLimit> applied, List<String> not
         out.add(new FillLimit(fill, axial));
         openCircuit(req, drive, lc, out, notes);
         out.addAll(drive.limits());
+        boolean byTemperature = l.maxWindingTempC().isPresent() && l.maxCurrentDensityAPerMm2() == 0;
         double jMax = l.maxCurrentDensityAPerMm2() > 0 ? l.maxCurrentDensityAPerMm2()
                 : req.winding().cooling().highAPerMm2();
-        out.add(FigureLimit.atMost("currentDensity", "limits.maxCurrentDensityAPerMm2", "A/mm^2", jMax,
-                "stays within %.1f A/mm^2 at the rated point",
-                s -> s.currentDensityAPerMm2(drive.ratedLineCurrentFloorA(s)),
-                FullEvaluation::ratedCurrentDensityAPerMm2));
+        if (!byTemperature) {
+            out.add(FigureLimit.atMost("currentDensity", "limits.maxCurrentDensityAPerMm2", "A/mm^2", jMax,
+                    "stays within %.1f A/mm^2 at the rated point",
+                    s -> s.currentDensityAPerMm2(drive.ratedLineCurrentFloorA(s)),
+                    FullEvaluation::ratedCurrentDensityAPerMm2));
+        }
         if (l.minEfficiency() > 0) {
             out.add(FigureLimit.atLeast("efficiency", "limits.minEfficiency", "", l.minEfficiency(),
                     "is at least %.2f efficient at the rated point",
                     drive::ratedEfficiencyBound, FullEvaluation::ratedEfficiency));
         }
-        if (l.maxCurrentDensityAPerMm2() == 0) {
+        String band = req.winding().cooling().name().toLowerCase(Locale.ROOT).replace('_', ' ');
+        if (byTemperature) {
+            notes.add(String.format(Locale.ROOT, "The winding temperature limit replaces the %s current-density "
+                    + "band (%.1f A/mm^2 at most): the thermal model decides what the winding can carry", band, jMax));
+        } else if (l.maxCurrentDensityAPerMm2() == 0) {
             notes.add(String.format(Locale.ROOT, "Current density limited to %.1f A/mm^2, the top of the %s band; "
-                    + "a winding-temperature limit will replace it when a thermal model is available", jMax,
-                    req.winding().cooling().name().toLowerCase(Locale.ROOT).replace('_', ' ')));
+                    + "give limits.maxWindingTempC to limit the winding's hot spot by the thermal model instead",
+                    jMax, band));
         }
+        machineLimits(req, drive, layouts, out, notes);
         List<AppliedLimit> applied = out.stream()
                 .map(x -> new AppliedLimit(x.name(), x.field(), x.allowed(), x.unit(), x.phrase())).toList();
-        return new LimitSet(List.copyOf(out), applied, List.copyOf(notes));
+        boolean machine = l.maxWindingTempC().isPresent() || l.maxCoggingPercent().isPresent();
+        return new LimitSet(List.copyOf(out), applied, List.copyOf(notes), machine);
+    }
+
+    /**
+     * The winding temperature and cogging limits, last: their full figures cost a thermal and a field solution.
+     * The winding is never cooler than the air around it, so the screen's bound of the hot spot is the ambient
+     * temperature (it discards nothing: every limit allowed is above it). Cogging is exact per layout; the rated
+     * shaft torque is at most the drive's bound ({@link DriveModel#ratedShaftTorqueBoundNm}), so the percentage is
+     * at least the cogging over that bound.
+     */
+    private static void machineLimits(SizingRequest req, DriveModel drive, List<Layout> layouts, List<Limit> out,
+                                      List<String> notes) {
+        Limits l = req.limits();
+        if (l.maxWindingTempC().isPresent()) {
+            double t = l.maxWindingTempC().getAsDouble();
+            double insulation = req.winding().insulationClass().limitC();
+            out.add(FigureLimit.atMost("windingTemperature", "limits.maxWindingTempC", "C", t,
+                    "keeps the winding's hot spot within %.0f C at the rated point (still air at "
+                            + Math.round(CoolingConditions.DEFAULT_AMBIENT_C) + " C)",
+                    s -> CoolingConditions.DEFAULT_AMBIENT_C, FullEvaluation::ratedWindingHotSpotC));
+            if (t > insulation) {
+                notes.add(String.format(Locale.ROOT, "The winding temperature limit, %.0f C, is above the class %s "
+                        + "insulation's %.0f C: a design near it ages its insulation fast", t,
+                        req.winding().insulationClass().name(), insulation));
+            }
+        }
+        if (l.maxCoggingPercent().isPresent()) {
+            Map<Layout, Double> cogging = MachineFigures.coggingByLayout(layouts, req.build().magnetTempC());
+            out.add(FigureLimit.atMost("cogging", "limits.maxCoggingPercent", "%", l.maxCoggingPercent().getAsDouble(),
+                    "cogs at most %.1f %% of its shaft torque at the rated point",
+                    s -> coggingPercentBound(cogging.get(s.windingCase.layout()), drive.ratedShaftTorqueBoundNm(s)),
+                    FullEvaluation::coggingPercentOfRated));
+        }
+    }
+
+    /** The least cogging percentage a torque bound allows (the same rule as the full figure). */
+    static double coggingPercentBound(double coggingNm, double torqueBoundNm) {
+        if (coggingNm == 0) {
+            return 0;
+        }
+        return torqueBoundNm > 0 ? 100 * coggingNm / torqueBoundNm : Double.POSITIVE_INFINITY;
     }
 
     /**

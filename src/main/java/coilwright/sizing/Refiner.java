@@ -248,7 +248,8 @@ final class Refiner {
         AlternatorSpec spec = space.spec(candidate);
         try {
             Alternator alt = AlternatorModel.build(spec);
-            return drive.evaluate(alt);
+            FullEvaluation f = drive.evaluate(alt);
+            return limits.needsMachineFigures() ? MachineFigures.add(f, alt, space.request().load()) : f;
         } catch (InfeasibleDesignException | InvalidInputException | SolverFailedException e) {
             return FullEvaluation.refused(spec, e.getMessage());
         }
@@ -260,6 +261,26 @@ final class Refiner {
 
     FullEvaluation cached(long candidate) {
         return cache.get(candidate);
+    }
+
+    /**
+     * Makes sure the designs to report carry the machine's figures (winding hot spot, cogging), working out on the
+     * pool those a limit did not already need.
+     */
+    void reported(List<Long> candidates) {
+        List<Long> missing = candidates.stream().distinct()
+                .filter(c -> cache.get(c).built() && Double.isNaN(cache.get(c).ratedWindingHotSpotC())).toList();
+        List<FullEvaluation> done = Parallel.map(pool, missing, c -> {
+            FullEvaluation f = cache.get(c);
+            try {
+                return MachineFigures.add(f, AlternatorModel.build(f.spec()), space.request().load());
+            } catch (InfeasibleDesignException | InvalidInputException | SolverFailedException e) {
+                return f;
+            }
+        });
+        for (int i = 0; i < missing.size(); i++) {
+            cache.put(missing.get(i), done.get(i));
+        }
     }
 
     int evaluated() {

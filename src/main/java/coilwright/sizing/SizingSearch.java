@@ -70,6 +70,7 @@ public final class SizingSearch {
         Refiner.Best best = refiner.best(screen.survivors, request.resultCount(), request.maxFullEvaluations());
         // the front has a budget of its own, and reuses every evaluation made for the ranking
         Refiner.Front front = refiner.front(screen.survivors, refiner.evaluated() + request.maxFullEvaluations());
+        refiner.reported(best.candidates());
         List<SizedDesign> designs = new ArrayList<>();
         for (int i = 0; i < best.candidates().size(); i++) {
             designs.add(design(p, refiner, best.candidates().get(i), i + 1));
@@ -127,7 +128,7 @@ public final class SizingSearch {
         SearchSpace space = new SearchSpace(request, layouts.layouts(), maxCandidates);
         LoadConstants lc = LoadConstants.of(request.load(), request.winding().windingTempC());
         DriveModel drive = DriveModel.of(request, lc);
-        LimitSet limits = LimitSet.of(request, drive, lc);
+        LimitSet limits = LimitSet.of(request, drive, lc, layouts.layouts());
         Scoring scoring = new Scoring(request.objective(), drive, lc, request.prices());
         progress.update(SizingProgress.Stage.LAYOUTS, 1, 1);
         return new Prepared(layouts, space, lc, drive, limits, scoring, new Screening(space, limits, scoring, lc));

@@ -100,10 +100,8 @@ final class SpeedDriveModel implements DriveModel {
         double rated = targets.ratedSpeedRpm();
         SpeedPoint p = AlternatorEvaluator.point(alt, load, rated);
         double cutIn = AlternatorEvaluator.closedFormCutInRpm(alt, load);
-        return new FullEvaluation(alt.spec(), "", p.powerToLoadW() > 0, cutIn, 0, rated, p.powerToLoadW(),
-                p.efficiency(), p.currentDensityAPerMm2(), FullEvaluation.fillOf(alt),
-                alt.emfLineRmsV(checkSpeedRpm()), checkSpeedRpm(), alt.copperMassKg(), alt.magnetMassKg(), 0,
-                AlternatorEvaluator.cautionsAt(alt, load, checkSpeedRpm(), checkSpeedSource(), p.powerToLoadW(),
+        return FullEvaluation.of(alt, p.powerToLoadW() > 0, cutIn, 0, p, alt.emfLineRmsV(checkSpeedRpm()),
+                checkSpeedRpm(), 0, AlternatorEvaluator.cautionsAt(alt, load, checkSpeedRpm(), checkSpeedSource(), p.powerToLoadW(),
                         p.dcCurrentA()));
     }
 }

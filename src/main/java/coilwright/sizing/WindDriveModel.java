@@ -141,11 +141,25 @@ final class WindDriveModel implements DriveModel {
         if (top <= s.cutInRpm * (1 - Limit.SCREEN_MARGIN)) {
             return 0;
         }
+        double d = Math.min(s.maxDcCurrentA(top, lc), s.dcCurrentFromShaftPowerA(rowShaftBoundW(s, row), lc));
+        return lc.batteryV() * d;
+    }
+
+    /** The most shaft power the rotor gives at a row between the cut-in speed and its top speed, W. */
+    private double rowShaftBoundW(ScreenValues s, int row) {
         double cp = parametric == null ? maxCp
                 : parametric.cp(Math.max(s.cutInRpm * (1 - Limit.SCREEN_MARGIN) * tsrPerRpm[row],
-                Math.min(parametric.optimumTipSpeedRatio(), top * tsrPerRpm[row])));
-        double d = Math.min(s.maxDcCurrentA(top, lc), s.dcCurrentFromShaftPowerA(windShaftW[row] * cp, lc));
-        return lc.batteryV() * d;
+                Math.min(parametric.optimumTipSpeedRatio(), topSpeedRpm[row] * tsrPerRpm[row])));
+        return windShaftW[row] * cp;
+    }
+
+    @Override
+    public double ratedShaftTorqueBoundNm(ScreenValues s) {
+        int row = drive.ratedRow();
+        if (topSpeedRpm[row] <= s.cutInRpm * (1 - Limit.SCREEN_MARGIN)) {
+            return 0;
+        }
+        return DriveModel.torqueBoundNm(rowShaftBoundW(s, row), s.cutInRpm * (1 - Limit.SCREEN_MARGIN));
     }
 
     @Override
@@ -239,10 +253,8 @@ final class WindDriveModel implements DriveModel {
         }
         WindMatchPoint ratedWind = r.points().get(drive.ratedRow());
         SpeedPoint rated = AlternatorEvaluator.point(alt, load, ratedWind.alternatorSpeedRpm());
-        return new FullEvaluation(alt.spec(), "", true, cutIn,
-                r.cutInWindSpeedMs().orElse(Double.POSITIVE_INFINITY), rated.speedRpm(), rated.powerToLoadW(),
-                rated.efficiency(), rated.currentDensityAPerMm2(), FullEvaluation.fillOf(alt),
-                r.openCircuitLineRmsVAtCheckSpeed(), r.checkSpeedRpm(), alt.copperMassKg(), alt.magnetMassKg(),
-                r.annualEnergy().annualEnergyKWh(), r.cautions());
+        return FullEvaluation.of(alt, true, cutIn, r.cutInWindSpeedMs().orElse(Double.POSITIVE_INFINITY), rated,
+                r.openCircuitLineRmsVAtCheckSpeed(), r.checkSpeedRpm(), r.annualEnergy().annualEnergyKWh(),
+                r.cautions());
     }
 }

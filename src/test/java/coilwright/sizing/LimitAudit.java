@@ -7,6 +7,7 @@ import coilwright.machine.AlternatorModel;
 import coilwright.machine.AlternatorSpec;
 import coilwright.system.AlternatorEvaluation;
 import coilwright.system.AlternatorEvaluator;
+import coilwright.system.HeatAssessment;
 import coilwright.system.HydroMatchResult;
 import coilwright.system.HydroMatcher;
 import coilwright.system.SpeedPoint;
@@ -70,6 +71,9 @@ final class LimitAudit {
                 case "ratedPower" -> -rated.powerToLoadW();
                 case "currentDensity" -> rated.currentDensityAPerMm2();
                 case "efficiency" -> -rated.efficiency();
+                case "windingTemperature" -> HeatAssessment.assess(alt, load, List.of(rated.speedRpm()),
+                        rated.speedRpm(), rated.speedRpm()).rated().windingHotSpotC();
+                case "cogging" -> 100 * HeatAssessment.cogging(alt).peakNm() / rated.shaftTorqueNm();
                 default -> throw new AssertionError("unknown limit " + l.limit());
             };
             double allowed = l.limit().equals("ratedPower") || l.limit().equals("efficiency") ? -l.allowed()

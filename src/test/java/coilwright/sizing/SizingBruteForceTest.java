@@ -1,5 +1,8 @@
 package coilwright.sizing;
 
+import coilwright.conductor.Cooling;
+import coilwright.conductor.ThermalClass;
+import coilwright.machine.Connection;
 import coilwright.turbine.TableCp;
 import coilwright.turbine.WindRotor;
 import org.junit.jupiter.api.AfterAll;
@@ -120,6 +123,98 @@ class SizingBruteForceTest {
         assertSearchMatchesBruteForce(SizingFixtures.smallRadialSpeed(Objective.ACTIVE_MASS,
                 new Limits(6, 0, 0, 0, 0)));
     }
+
+    /** Both machine limits bind on this space: each removes candidates the others accept. */
+    @Test
+    void radial_hydro_with_winding_temperature_and_cogging_limits() {
+        SizingRequest base = SizingFixtures.smallRadialHydro(Objective.ANNUAL_ENERGY);
+        SizingRequest req = withLimits(base, base.limits().withMaxWindingTempC(118).withMaxCoggingPercent(38));
+        assertSearchMatchesBruteForce(req);
+        assertBinds(new BruteForce(req, POOL), "cogging");
+        SizingResult result = new SizingSearch(POOL).run(req);
+        for (SizedDesign d : result.designs()) {
+            assertTrue(d.figures().ratedWindingHotSpotC().orElseThrow() <= 118, "reported and within the limit");
+            assertTrue(d.figures().coggingPercentOfRatedTorque().orElseThrow() <= 38, "reported and within the limit");
+            assertTrue(d.figures().coggingPeakNm() > 0, "a slotted stator cogs");
+        }
+    }
+
+    /** The temperature limit given without a current density replaces the cooling's band. */
+    @Test
+    void a_winding_temperature_limit_alone_replaces_the_current_density_band() {
+        SizingRequest base = SizingFixtures.smallRadialHydro(Objective.ANNUAL_ENERGY);
+        SizingRequest req = withLimits(base, Limits.defaults().withMaxWindingTempC(118));
+        assertSearchMatchesBruteForce(req);
+        assertBinds(new BruteForce(req, POOL), "windingTemperature");
+        SizingResult result = new SizingSearch(POOL).run(req);
+        List<String> applied = result.limits().stream().map(AppliedLimit::limit).toList();
+        assertTrue(applied.contains("windingTemperature") && !applied.contains("currentDensity"), applied::toString);
+        assertTrue(result.notes().stream().anyMatch(n -> n.contains("replaces")), result.notes()::toString);
+    }
+
+    /** A wind drive: the cogging screen's torque bound (rotor power over the cut-in speed) is used and safe. */
+    @Test
+    void radial_wind_with_a_cogging_limit() {
+        SizingRequest req = new SizingRequest(SizingFixtures.wind2m(), SizingFixtures.leadAcid12V(),
+                SizingFixtures.motorStator(8, 8), new WindingChoices(6, 12, WireRange.awg(16, 16, 1),
+                List.of(Connection.STAR, Connection.DELTA), 1, 0.85, Cooling.OPEN_VENTILATED, ThermalClass.F, 90),
+                Limits.defaults().withMaxCoggingPercent(COGGING_WIND_PERCENT), Objective.ANNUAL_ENERGY,
+                new MaterialPrices(15, 60, 8), 3, 10_000);
+        BruteForce all = new BruteForce(req, POOL);
+        assertBinds(all, "cogging");
+        assertSearchMatchesBruteForce(req);
+    }
+
+    private static final double COGGING_WIND_PERCENT = 9.9;
+
+    private static SizingRequest withLimits(SizingRequest r, Limits limits) {
+        return new SizingRequest(r.drive(), r.load(), r.build(), r.winding(), limits, r.objective(), r.prices(),
+                r.resultCount(), r.maxFullEvaluations());
+    }
+
+    /** Each named limit rejects, under the full model, some built candidate that meets every other limit. */
+    private static void assertBinds(BruteForce all, String... names) {
+        List<Limit> limits = all.prepared.limits().limits();
+        for (String name : names) {
+            long alone = 0;
+            for (long c = 0; c < all.size; c++) {
+                FullEvaluation f = all.full(c);
+                if (!f.built()) {
+                    continue;
+                }
+                List<Limit> broken = limits.stream().filter(l -> l.rejects(f)).toList();
+                alone += broken.size() == 1 && broken.get(0).name().equals(name) ? 1 : 0;
+            }
+            assertTrue(alone > 0, name + " binds on its own somewhere");
+        }
+    }
+
+    /**
+     * The wind energy bound (per row, the bridge's current at the top speed against the rotor's best power above the
+     * cut-in) is at least the full model's energy for every candidate that charges, and within a quarter of it for
+     * the best one.
+     */
+    @Test
+    void the_wind_energy_bound_holds_for_every_candidate_and_is_tight_at_the_best() {
+        BruteForce all = new BruteForce(SizingFixtures.smallAxialWind(Objective.ANNUAL_ENERGY), POOL);
+        int checked = 0;
+        for (long c = 0; c < all.size; c++) {
+            FullEvaluation f = all.full(c);
+            if (f.built() && f.charges()) {
+                double bound = all.prepared.scoring().scoreBound(all.screen(c));
+                assertTrue(bound >= f.annualEnergyKWh(), "candidate " + c + ": bound " + bound + " < "
+                        + f.annualEnergyKWh());
+                checked++;
+            }
+        }
+        assertTrue(checked > 10, "candidates that charge");
+        long best = all.best(1).get(0);
+        double ratio = all.prepared.scoring().scoreBound(all.screen(best)) / all.full(best).annualEnergyKWh();
+        assertTrue(ratio < TIGHT_AT_BEST, "bound over energy at the best: " + ratio);
+    }
+
+    /** How far above the best design's energy its bound may be. */
+    private static final double TIGHT_AT_BEST = 1.25;
 
     @Test
     void the_pareto_front_is_the_brute_force_front() {

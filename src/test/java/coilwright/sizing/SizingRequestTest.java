@@ -38,6 +38,21 @@ class SizingRequestTest {
     }
 
     @Test
+    void winding_temperature_and_cogging_limits_are_refused_out_of_range() {
+        Limits none = Limits.defaults();
+        FieldError t = only(() -> none.withMaxWindingTempC(300));
+        assertEquals("maxWindingTempC", t.field());
+        assertTrue(t.allowed().contains("250"), t.allowed());
+        assertEquals("maxWindingTempC", only(() -> none.withMaxWindingTempC(20)).field());
+        assertEquals("maxWindingTempC", only(() -> none.withMaxWindingTempC(Double.NaN)).field());
+        FieldError c = only(() -> none.withMaxCoggingPercent(0));
+        assertEquals("maxCoggingPercent", c.field());
+        assertTrue(c.allowed().contains("100"), c.allowed());
+        assertEquals("maxCoggingPercent", only(() -> none.withMaxCoggingPercent(150)).field());
+        assertTrue(none.maxWindingTempC().isEmpty() && none.maxCoggingPercent().isEmpty(), "absent by default");
+    }
+
+    @Test
     void wind_speeds_follow_the_table_step() {
         WindDrive ok = SizingFixtures.wind3m();
         FieldError e = only(() -> new WindDrive(ok.rotor(), ok.site(), ok.wind(), 25, 10.2));

@@ -4,7 +4,11 @@ import coilwright.load.Chemistry;
 import coilwright.sizing.SizingRequest;
 import coilwright.validation.FieldError;
 import coilwright.validation.InvalidInputException;
+import coilwright.system.WindMatchRequest;
 import coilwright.web.RecordBinder;
+import coilwright.web.units.Fmt;
+import coilwright.web.units.Quantity;
+import coilwright.web.units.Units;
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.JsonNodeFactory;
 import com.fasterxml.jackson.databind.node.ObjectNode;
@@ -25,58 +29,134 @@ import java.util.regex.Pattern;
 final class SizingForm {
     static final String DRIVE = "driveType";
     static final String BUILD = "buildType";
+    /** Hydro: the flow-duration curve as "flow@percent" pairs, the flow in the form's flow unit. */
+    static final String FLOW_DURATION = "flowDuration";
+    private static final Pattern PAIR = Pattern.compile("\\s*([^@\\s]+)\\s*@\\s*([^@\\s]+)\\s*");
     private static final Pattern LIST_SEPARATOR = Pattern.compile("[,;\\s]+");
     private static final JsonNodeFactory NODES = JsonNodeFactory.instance;
 
+    /** How a field is shown and converted at the edge, in SI and in imperial units. */
+    enum Unit {
+        NONE("", "", 1, null),
+        WHOLE("", "", 0, null),
+        TEXT("", "", -1, null),
+        METRE("m", "ft", 1, Quantity.LENGTH),
+        MM("mm", "in", 1e-3, Quantity.SMALL_LENGTH),
+        MM2("mm²", "mm²", 1e-6, null),
+        SPEED("m/s", "mph", 1, Quantity.SPEED),
+        LITRE_PER_S("L/s", "US gpm", 1e-3, Quantity.FLOW),
+        CELSIUS("°C", "°F", 1, Quantity.TEMPERATURE),
+        PERCENT("%", "%", 0.01, null),
+        PER_KG("per kg", "per lb", 1, Quantity.MASS),
+        A_PER_MM2("A/mm²", "A/mm²", 1, null),
+        VOLT("V", "V", 1, null),
+        RPM("rpm", "rpm", 1, null);
+
+        private final String si;
+        private final String imperial;
+        /** SI per shown SI unit: 0 for whole numbers, -1 for text. */
+        final double toSi;
+        private final Quantity quantity;
+
+        Unit(String si, String imperial, double toSi, Quantity quantity) {
+            this.si = si;
+            this.imperial = imperial;
+            this.toSi = toSi;
+            this.quantity = quantity;
+        }
+
+        String symbol(Units units) {
+            return units == Units.IMPERIAL ? imperial : si;
+        }
+
+        /** A typed number to the request's SI value (NIST SP 811 factors in {@link Quantity}). */
+        double toSi(double typed, Units units) {
+            if (units != Units.IMPERIAL || quantity == null) {
+                return typed * toSi;
+            }
+            return switch (quantity) {
+                case FLOW -> quantity.fromImperial(typed);
+                case MASS -> typed / quantity.fromImperial(1);
+                default -> quantity.fromImperial(typed) * toSi;
+            };
+        }
+
+        /** The request's SI value as typed in these units. */
+        double fromSi(double si, Units units) {
+            if (units != Units.IMPERIAL || quantity == null) {
+                return si / toSi;
+            }
+            return switch (quantity) {
+                case FLOW -> quantity.toImperial(si);
+                case MASS -> si * quantity.fromImperial(1);
+                default -> quantity.toImperial(si / toSi);
+            };
+        }
+
+        boolean converts() {
+            return quantity != null && !si.equals(imperial);
+        }
+    }
+
     /**
-     * A form field: its request path, the factor from the shown unit to SI (0 for whole numbers, -1 for text) and
-     * the shown unit when it is not the request's own.
+     * A form field: its request path and unit; an optional one left blank (or 0) leaves the request field out.
      */
-    private record Field(String name, String path, double toSi, String shownUnit) {
+    private record Field(String name, String path, Unit unit, boolean optional) {
+        Field(String name, String path, Unit unit) {
+            this(name, path, unit, false);
+        }
+
+        double toSi() {
+            return unit.toSi;
+        }
     }
 
     private static final List<Field> WIND = List.of(
-            new Field("rotorDiameterM", "drive.rotor.diameterM", 1, ""),
-            new Field("furlingRpm", "drive.rotor.maxRotorSpeedRpm", 1, ""),
-            new Field("meanWindMs", "drive.wind.meanWindSpeedMs", 1, ""),
-            new Field("ratedWindMs", "drive.ratedWindSpeedMs", 1, ""),
-            new Field("cutInWindMs", "limits.maxCutInWindSpeedMs", 1, ""));
+            new Field("rotorDiameterM", "drive.rotor.diameterM", Unit.METRE),
+            new Field("furlingRpm", "drive.rotor.maxRotorSpeedRpm", Unit.RPM),
+            new Field("meanWindMs", "drive.wind.meanWindSpeedMs", Unit.SPEED),
+            new Field("ratedWindMs", "drive.ratedWindSpeedMs", Unit.SPEED),
+            new Field("cutInWindMs", "limits.maxCutInWindSpeedMs", Unit.SPEED));
     private static final List<Field> HYDRO = List.of(
-            new Field("headM", "drive.site.grossHeadM", 1, ""),
-            new Field("flowLps", "drive.site.designFlowM3s", 1e-3, "L/s"),
-            new Field("penstockLengthM", "drive.penstock.lengthM", 1, ""),
-            new Field("penstockDiameterMm", "drive.penstock.innerDiameterM", 1e-3, "mm"),
-            new Field("runnerRpm", "drive.runner.targetSpeedRpm", 1, ""),
-            new Field("driveRatio", "drive.driveRatio", 1, ""));
+            new Field("headM", "drive.site.grossHeadM", Unit.METRE),
+            new Field("flowLps", "drive.site.designFlowM3s", Unit.LITRE_PER_S),
+            new Field("penstockLengthM", "drive.penstock.lengthM", Unit.METRE),
+            new Field("penstockDiameterMm", "drive.penstock.innerDiameterM", Unit.MM),
+            new Field("runnerRpm", "drive.runner.targetSpeedRpm", Unit.RPM),
+            new Field("driveRatio", "drive.driveRatio", Unit.NONE),
+            new Field(FLOW_DURATION, "drive.site.flowDuration", Unit.LITRE_PER_S, true));
     private static final List<Field> AXIAL = List.of(
-            new Field("discDiameterMm", "build.discDiametersM", 1e-3, "mm"),
-            new Field("coilThicknessMm", "build.coilLayerThicknessesM", 1e-3, "mm"));
+            new Field("discDiameterMm", "build.discDiametersM", Unit.MM),
+            new Field("coilThicknessMm", "build.coilLayerThicknessesM", Unit.MM));
     private static final List<Field> RADIAL = List.of(
-            new Field("boreMm", "build.gapDiameterM", 1e-3, "mm"),
-            new Field("stackMm", "build.stackLengthM", 1e-3, "mm"),
-            new Field("slots", "build.slots", 0, ""),
-            new Field("slotDepthMm", "build.stator.slotDepthM", 1e-3, "mm"),
-            new Field("slotWidthMm", "build.stator.slotWidthM", 1e-3, "mm"));
+            new Field("boreMm", "build.gapDiameterM", Unit.MM),
+            new Field("stackMm", "build.stackLengthM", Unit.MM),
+            new Field("slots", "build.slots", Unit.WHOLE),
+            new Field("slotDepthMm", "build.stator.slotDepthM", Unit.MM),
+            new Field("slotWidthMm", "build.stator.slotWidthM", Unit.MM));
     private static final List<Field> COMMON = List.of(
-            new Field("cableLengthM", "load.acCable.lengthM", 1, ""),
-            new Field("cableAreaMm2", "load.acCable.conductorAreaM2", 1e-6, "mm²"),
-            new Field("minPoles", "build.minPoles", 0, ""),
-            new Field("maxPoles", "build.maxPoles", 0, ""),
-            new Field("magnetGrade", "build.magnets[0].gradeName", -1, ""),
-            new Field("magnetWidthMm", "build.magnets[0].widthM", 1e-3, "mm"),
-            new Field("magnetLengthMm", "build.magnets[0].lengthM", 1e-3, "mm"),
-            new Field("magnetThicknessMm", "build.magnets[0].thicknessM", 1e-3, "mm"),
-            new Field("minTurns", "winding.minTurnsPerCoil", 0, ""),
-            new Field("maxTurns", "winding.maxTurnsPerCoil", 0, ""),
-            new Field("thickestAwg", "winding.wire.thickestAwg", 0, ""),
-            new Field("thinnestAwg", "winding.wire.thinnestAwg", 0, ""),
-            new Field("maxStrands", "winding.wire.maxStrands", 0, ""),
-            new Field("maxCurrentDensity", "limits.maxCurrentDensityAPerMm2", 1, ""),
-            new Field("minEfficiencyPct", "limits.minEfficiency", 0.01, "%"),
-            new Field("maxOpenCircuitV", "limits.maxOpenCircuitLineRmsV", 1, ""),
-            new Field("objective", "objective", -1, ""),
-            new Field("copperPrice", "prices.copperPerKg", 1, ""),
-            new Field("magnetPrice", "prices.rareEarthMagnetPerKg", 1, ""));
+            new Field("cableLengthM", "load.acCable.lengthM", Unit.METRE),
+            new Field("cableAreaMm2", "load.acCable.conductorAreaM2", Unit.MM2),
+            new Field("minPoles", "build.minPoles", Unit.WHOLE),
+            new Field("maxPoles", "build.maxPoles", Unit.WHOLE),
+            new Field("magnetGrade", "build.magnets[0].gradeName", Unit.TEXT),
+            new Field("magnetWidthMm", "build.magnets[0].widthM", Unit.MM),
+            new Field("magnetLengthMm", "build.magnets[0].lengthM", Unit.MM),
+            new Field("magnetThicknessMm", "build.magnets[0].thicknessM", Unit.MM),
+            new Field("minTurns", "winding.minTurnsPerCoil", Unit.WHOLE),
+            new Field("maxTurns", "winding.maxTurnsPerCoil", Unit.WHOLE),
+            new Field("thickestAwg", "winding.wire.thickestAwg", Unit.WHOLE),
+            new Field("thinnestAwg", "winding.wire.thinnestAwg", Unit.WHOLE),
+            new Field("maxStrands", "winding.wire.maxStrands", Unit.WHOLE),
+            new Field("maxCurrentDensity", "limits.maxCurrentDensityAPerMm2", Unit.A_PER_MM2),
+            new Field("maxWindingTempC", "limits.maxWindingTempC", Unit.CELSIUS, true),
+            new Field("maxCoggingPct", "limits.maxCoggingPercent", Unit.NONE, true),
+            new Field("minEfficiencyPct", "limits.minEfficiency", Unit.PERCENT),
+            new Field("maxOpenCircuitV", "limits.maxOpenCircuitLineRmsV", Unit.VOLT),
+            new Field("objective", "objective", Unit.TEXT),
+            new Field("copperPrice", "prices.copperPerKg", Unit.PER_KG),
+            new Field("magnetPrice", "prices.rareEarthMagnetPerKg", Unit.PER_KG));
+    private static final List<List<Field>> GROUPS = List.of(WIND, HYDRO, AXIAL, RADIAL, COMMON);
 
     /**
      * The defaults: the worked example's 3 m rotor on a 5 m/s site charging 24 V, one disc and stator size, a space
@@ -96,6 +176,7 @@ final class SizingForm {
         v.put("penstockDiameterMm", "100");
         v.put("runnerRpm", "375");
         v.put("driveRatio", "2");
+        v.put(FLOW_DURATION, "30@0, 15@30, 10@60, 6@90, 4@100");
         v.put("chemistry", "LEAD_ACID");
         v.put("batteryV", "24");
         v.put("cableLengthM", "30");
@@ -120,6 +201,8 @@ final class SizingForm {
         v.put("thinnestAwg", "14");
         v.put("maxStrands", "2");
         v.put("maxCurrentDensity", "0");
+        v.put("maxWindingTempC", "");
+        v.put("maxCoggingPct", "");
         v.put("minEfficiencyPct", "0");
         v.put("maxOpenCircuitV", "0");
         v.put("objective", "ANNUAL_ENERGY");
@@ -134,12 +217,94 @@ final class SizingForm {
         this.binder = binder;
     }
 
+    /** The unit shown beside each field, in the units chosen. */
+    static Map<String, String> symbols(Units units) {
+        Map<String, String> out = new LinkedHashMap<>();
+        for (List<Field> group : GROUPS) {
+            group.forEach(f -> out.put(f.name(), f.unit().symbol(units)));
+        }
+        out.put("batteryV", "V");
+        out.put("thickestAwg", "AWG");
+        out.put("thinnestAwg", "AWG");
+        out.put("maxCoggingPct", "%");
+        return out;
+    }
+
     /**
-     * The request the form describes.
+     * Typed values shown in {@code to}: every readable number of a field whose unit differs between the systems is
+     * converted from {@code from}; anything else stays as typed (the binder then names it).
+     */
+    static Map<String, String> convert(Map<String, String> typed, Units from, Units to) {
+        Map<String, String> out = new LinkedHashMap<>(typed);
+        if (from == to) {
+            return out;
+        }
+        for (List<Field> group : GROUPS) {
+            for (Field f : group) {
+                String text = out.get(f.name());
+                if (text == null || !f.unit().converts()) {
+                    continue;
+                }
+                if (f.name().equals(FLOW_DURATION)) {
+                    out.put(f.name(), convertPairs(text, f.unit(), from, to));
+                    continue;
+                }
+                List<String> parts = new ArrayList<>();
+                for (String part : LIST_SEPARATOR.split(text.trim())) {
+                    try {
+                        double v = Double.parseDouble(part);
+                        parts.add(v == 0 && f.optional() ? "0"
+                                : Fmt.plain(f.unit().fromSi(f.unit().toSi(v, from), to), 5));
+                    } catch (NumberFormatException e) {
+                        parts = null;
+                        break;
+                    }
+                }
+                if (parts != null && !text.isBlank()) {
+                    out.put(f.name(), String.join(", ", parts));
+                }
+            }
+        }
+        return out;
+    }
+
+    /** Flow-duration pairs with each flow converted; the text as typed when a pair cannot be read. */
+    private static String convertPairs(String text, Unit unit, Units from, Units to) {
+        List<String> out = new ArrayList<>();
+        for (String pair : text.split("[,;]")) {
+            java.util.regex.Matcher m = PAIR.matcher(pair);
+            if (pair.isBlank()) {
+                continue;
+            }
+            try {
+                if (!m.matches()) {
+                    return text;
+                }
+                double flow = unit.fromSi(unit.toSi(Double.parseDouble(m.group(1)), from), to);
+                out.add(Fmt.plain(flow, 5) + "@" + m.group(2));
+            } catch (NumberFormatException e) {
+                return text;
+            }
+        }
+        return String.join(", ", out);
+    }
+
+    /**
+     * The request the form describes, with every figure typed in SI units.
      *
      * @throws InvalidInputException every invalid field, under its request path (see {@link #onForm})
      */
     SizingRequest bind(Map<String, String> typed) {
+        return bind(typed, Units.SI);
+    }
+
+    /**
+     * The request the form describes, typed in {@code units}. The wind table steps by 0.5 m/s, so a rated wind typed
+     * in mph is taken at the nearest step ({@link #notes} says so).
+     *
+     * @throws InvalidInputException every invalid field, under its request path (see {@link #onForm})
+     */
+    SizingRequest bind(Map<String, String> typed, Units units) {
         boolean wind = !"HYDRO".equals(typed.get(DRIVE));
         boolean axial = !"RADIAL".equals(typed.get(BUILD));
         ObjectNode tree = skeleton(wind, axial, typed);
@@ -148,7 +313,7 @@ final class SizingForm {
         fields.addAll(wind ? WIND : HYDRO);
         fields.addAll(axial ? AXIAL : RADIAL);
         for (Field f : fields) {
-            put(tree, f, typed.getOrDefault(f.name(), "").trim(), errors);
+            put(tree, f, typed.getOrDefault(f.name(), "").trim(), units, errors);
         }
         cells(tree, typed, errors);
         if (!errors.isEmpty()) {
@@ -157,17 +322,19 @@ final class SizingForm {
         try {
             return binder.bind(tree, SizingRequest.class);
         } catch (InvalidInputException e) {
-            throw new InvalidInputException(e.errors().stream().map(err -> asTyped(err, typed)).toList());
+            throw new InvalidInputException(e.errors().stream().map(err -> asTyped(err, typed, units)).toList());
         }
     }
 
     /** A message about a converted field starts with the value as the user typed it, in the form's unit. */
-    private static FieldError asTyped(FieldError e, Map<String, String> typed) {
+    private static FieldError asTyped(FieldError e, Map<String, String> typed, Units units) {
         String name = onForm(e.field());
-        for (List<Field> group : List.of(WIND, HYDRO, AXIAL, RADIAL, COMMON)) {
+        for (List<Field> group : GROUPS) {
             for (Field f : group) {
-                if (f.name().equals(name) && !f.shownUnit().isEmpty()) {
-                    return new FieldError(e.field(), e.value(), typed.getOrDefault(name, "") + " " + f.shownUnit()
+                String shown = f.unit().symbol(units);
+                boolean differs = f.unit().toSi != 1 && f.unit().toSi > 0 || units == Units.IMPERIAL && f.unit().converts();
+                if (f.name().equals(name) && differs && !shown.isEmpty() && !name.equals(FLOW_DURATION)) {
+                    return new FieldError(e.field(), e.value(), typed.getOrDefault(name, "") + " " + shown
                             + " is out of range (the request in SI units: " + e.message() + ")", e.allowed());
                 }
             }
@@ -175,9 +342,28 @@ final class SizingForm {
         return e;
     }
 
+    /** What the page did with the units typed: a rated wind in mph taken at the table's nearest 0.5 m/s step. */
+    static List<String> notes(Map<String, String> typed, Units units) {
+        if (units != Units.IMPERIAL || "HYDRO".equals(typed.get(DRIVE))) {
+            return List.of();
+        }
+        try {
+            double mph = Double.parseDouble(typed.getOrDefault("ratedWindMs", "").trim());
+            double ms = ratedWindStep(Unit.SPEED.toSi(mph, units));
+            return List.of(String.format(Locale.ROOT, "Rated wind %s mph is taken as %.1f m/s (%s mph), the nearest "
+                    + "step of the 0.5 m/s wind table", Fmt.plain(mph, 4), ms, Fmt.plain(Unit.SPEED.fromSi(ms, units), 4)));
+        } catch (NumberFormatException e) {
+            return List.of();
+        }
+    }
+
+    private static double ratedWindStep(double ms) {
+        return Math.round(ms / WindMatchRequest.WIND_STEP_MS) * WindMatchRequest.WIND_STEP_MS;
+    }
+
     /** The form field that shows a message about a request path; the path itself when no field shows it. */
     static String onForm(String path) {
-        for (List<Field> group : List.of(WIND, HYDRO, AXIAL, RADIAL, COMMON)) {
+        for (List<Field> group : GROUPS) {
             for (Field f : group) {
                 if (path.equals(f.path()) || path.startsWith(f.path() + "[") || path.startsWith(f.path() + ".")) {
                     return f.name();
@@ -210,7 +396,14 @@ final class SizingForm {
         }
     }
 
-    private static void put(ObjectNode tree, Field f, String text, List<FieldError> errors) {
+    private static void put(ObjectNode tree, Field f, String text, Units units, List<FieldError> errors) {
+        if (f.name().equals(FLOW_DURATION) && text.isEmpty()) {
+            ((ObjectNode) tree.at("/drive/site")).putArray("flowDuration");
+            return;
+        }
+        if (f.optional() && (text.isEmpty() || text.matches("0+(\\.0*)?"))) {
+            return;
+        }
         if (text.isEmpty()) {
             errors.add(new FieldError(f.name(), "", f.name() + ": is required", "a value"));
             return;
@@ -228,21 +421,49 @@ final class SizingForm {
             return;
         }
         boolean list = f.path().endsWith("sM") && (f.path().contains("discDiameters") || f.path().contains("Thicknesses"));
+        if (f.name().equals(FLOW_DURATION)) {
+            pairs(parent.putArray(leaf), f, text, units, errors);
+            return;
+        }
         try {
             if (list) {
                 ArrayNode values = parent.putArray(leaf);
                 for (String part : LIST_SEPARATOR.split(text)) {
-                    values.add(Double.parseDouble(part) * f.toSi());
+                    values.add(f.unit().toSi(Double.parseDouble(part), units));
                 }
             } else if (f.toSi() == 0) {
                 parent.put(leaf, Integer.parseInt(text));
             } else {
-                parent.put(leaf, Double.parseDouble(text) * f.toSi());
+                double si = f.unit().toSi(Double.parseDouble(text), units);
+                boolean snap = units == Units.IMPERIAL && f.name().equals("ratedWindMs") && Double.isFinite(si);
+                parent.put(leaf, snap ? ratedWindStep(si) : si);
             }
         } catch (NumberFormatException e) {
             errors.add(new FieldError(f.name(), text, f.name() + " = " + text + ": must be "
                     + (f.toSi() == 0 ? "a whole number" : list ? "numbers separated by commas" : "a number"),
                     f.toSi() == 0 ? "whole numbers" : "numbers"));
+        }
+    }
+
+    /** "flow@percent" pairs, separated by commas or semicolons, to the request's flow-duration points. */
+    private static void pairs(ArrayNode points, Field f, String text, Units units, List<FieldError> errors) {
+        for (String pair : text.split("[,;]")) {
+            if (pair.isBlank()) {
+                continue;
+            }
+            java.util.regex.Matcher m = PAIR.matcher(pair);
+            try {
+                if (!m.matches()) {
+                    throw new NumberFormatException(pair);
+                }
+                points.addObject().put("flowM3s", f.unit().toSi(Double.parseDouble(m.group(1)), units))
+                        .put("percentOfTime", Double.parseDouble(m.group(2)));
+            } catch (NumberFormatException e) {
+                errors.add(new FieldError(f.name(), text, f.name() + " = " + text + ": must be pairs of flow@percent "
+                        + "of the year, separated by commas, e.g. 30@0, 15@30, 10@60, 6@90, 4@100",
+                        "flow@percent pairs, percent 0 to 100 increasing"));
+                return;
+            }
         }
     }
 
@@ -259,7 +480,7 @@ final class SizingForm {
             drive.putObject("wind").put("weibullShapeK", 2.0);
         } else {
             drive.put("type", "HydroDrive").put("drivetrainEfficiency", 0.95).put("waterTempC", 10);
-            drive.putObject("site").putArray("flowDuration");
+            drive.putObject("site");
             drive.putObject("penstock").put("roughnessM", 1.5e-6).put("hazenWilliamsC", 150).put("sumMinorLossK", 2.0);
             drive.putObject("runner").put("kind", "IMPULSE").put("jetCount", 2).put("diameterM", 0)
                     .put("peakEfficiency", 0);

@@ -12,7 +12,12 @@ import coilwright.web.RecordBinder;
 import coilwright.web.units.Units;
 import io.javalin.http.Context;
 
+import java.net.URLEncoder;
+import java.nio.charset.StandardCharsets;
 import java.util.HashMap;
+import java.util.Locale;
+import java.util.TreeMap;
+import java.util.stream.Collectors;
 import java.util.List;
 import java.util.Map;
 
@@ -23,6 +28,8 @@ import java.util.Map;
  */
 public final class SizingPage {
     private static final String PROGRESS_PREFIX = "/sizing/jobs/";
+    /** The units the fields of a units-switch address were typed in. */
+    static final String ENTERED_IN = "enteredIn";
     private final SizingJobs jobs;
     private final SizingForm form;
 
@@ -31,38 +38,72 @@ public final class SizingPage {
         this.form = new SizingForm(binder);
     }
 
-    /** {@code GET /sizing}. */
+    /**
+     * {@code GET /sizing}: the defaults, or the fields in the query (the units switch carries what was typed, with
+     * {@code enteredIn} naming the units it was typed in), shown in the units chosen.
+     */
     public void show(Context ctx) {
-        ctx.render("sizing", model(FormResult.showing(SizingForm.defaults())));
+        Units units = Units.of(ctx);
+        Map<String, String> query = new java.util.LinkedHashMap<>();
+        ctx.queryParamMap().forEach((k, v) -> query.put(k, v.isEmpty() ? "" : v.get(0).trim()));
+        String from = query.remove(ENTERED_IN);
+        query.remove(Units.PARAM);
+        Map<String, String> typed = query.containsKey(SizingForm.DRIVE) ? query : SizingForm.defaults();
+        Units typedIn = from != null ? Units.choose(from, null) : query.containsKey(SizingForm.DRIVE) ? units : Units.SI;
+        Map<String, String> shown = SizingForm.convert(typed, typedIn, units);
+        Map<String, Object> model = model(units, FormResult.showing(shown));
+        model.put("unitsLink", unitsLink(shown, units));
+        ctx.render("sizing", model);
     }
 
     /** {@code POST /sizing}. */
     public void size(Context ctx) {
+        Units units = Units.of(ctx);
         Map<String, String> typed = FormPage.posted(ctx);
-        FormPage.open(ctx, new FormPage("sizing", typed, SizingPage::model, SizingForm::onForm));
-        SizingRequest request = form.bind(typed);
+        FormPage.open(ctx, new FormPage("sizing", typed, f -> model(units, f), SizingForm::onForm));
+        SizingRequest request = form.bind(typed, units);
         SizingAnswer answer = jobs.answer(request, false);
         if (answer.job().isPresent()) {
             ctx.redirect(PROGRESS_PREFIX + answer.job().get().id(), io.javalin.http.HttpStatus.SEE_OTHER);
             return;
         }
-        Map<String, Object> model = model(FormResult.showing(typed));
-        model.putAll(SizingView.of(request, answer.result().orElseThrow(), Units.of(ctx)));
+        Map<String, Object> model = model(units, FormResult.showing(typed));
+        model.putAll(SizingView.of(request, answer.result().orElseThrow(), units));
+        model.put("unitNotes", SizingForm.notes(typed, units));
+        model.put("unitsLink", unitsLink(typed, units));
         ctx.render("sizing", model);
     }
 
-    /** {@code GET /sizing/jobs/{jobId}}: progress, refreshed every 2 s, then the designs. */
+    /** The form's own address with what was typed, so switching units keeps it (converted on arrival). */
+    private static String unitsLink(Map<String, String> typed, Units units) {
+        Map<String, String> q = new TreeMap<>(typed);
+        q.remove(Units.PARAM);
+        q.put(ENTERED_IN, units.name().toLowerCase(Locale.ROOT));
+        return "/sizing?" + q.entrySet().stream().map(e -> enc(e.getKey()) + "=" + enc(e.getValue()))
+                .collect(Collectors.joining("&"));
+    }
+
+    private static String enc(String s) {
+        return URLEncoder.encode(s, StandardCharsets.UTF_8);
+    }
+
+    /**
+     * {@code GET /sizing/jobs/{jobId}}: progress, refreshed every 2 s, then the designs; with {@code ?live=1} (asked
+     * for by the progress script, which follows the job's events) without the refresh.
+     */
     public void job(Context ctx) {
         String id = ctx.pathParam("jobId");
         SizingJob job = jobs.find(id).orElseThrow(() -> new NotFoundException("There is no design search " + id
                 + " (finished searches are kept for 15 minutes). Start a new one at /sizing."));
-        Map<String, Object> model = model(FormResult.showing(SizingForm.defaults()));
+        Units units = Units.of(ctx);
+        Map<String, Object> model = model(units, FormResult.showing(SizingForm.defaults()));
         model.put("job", job);
         model.put("percent", Math.round(100 * job.fraction()));
-        if (!job.finished()) {
+        if (!job.finished() && !"1".equals(ctx.queryParam("live"))) {
+            // without script the page reloads itself; the progress script asks for ?live=1 and follows the events
             ctx.header("Refresh", "2");
         } else if (job.result().isPresent()) {
-            jobs.requestOf(id).ifPresent(r -> model.putAll(SizingView.of(r, job.result().get(), Units.of(ctx))));
+            jobs.requestOf(id).ifPresent(r -> model.putAll(SizingView.of(r, job.result().get(), units)));
         }
         ctx.render("sizing", model);
     }
@@ -74,8 +115,10 @@ public final class SizingPage {
         ctx.redirect(PROGRESS_PREFIX + id, io.javalin.http.HttpStatus.SEE_OTHER);
     }
 
-    private static Map<String, Object> model(FormResult form) {
+    private static Map<String, Object> model(Units units, FormResult form) {
         Map<String, Object> m = new HashMap<>();
+        m.put("u", SizingForm.symbols(units));
+        m.put("unitNotes", List.of());
         m.put("title", "Size an alternator");
         m.put("form", form);
         m.put("drives", List.of(new Choice("WIND", "Wind rotor"), new Choice("HYDRO", "Hydro (impulse runner)")));

@@ -12,6 +12,7 @@ import coilwright.web.charts.ChartSpec;
 import coilwright.web.charts.Series;
 import coilwright.web.charts.SvgCharts;
 import coilwright.web.pages.DesignFormValues;
+import coilwright.web.units.Quantity;
 import coilwright.web.units.Units;
 
 import com.fasterxml.jackson.core.JsonProcessingException;
@@ -37,7 +38,8 @@ final class SizingView {
      */
     record Row(int rank, String layout, int coils, int poles, int turns, String wire, String connection,
                String cutIn, String cutInWind, String ratedPower, String efficiency, String currentDensity,
-               String openCircuit, String mass, String cost, String energy, Map<String, String> sort,
+               String openCircuit, String mass, String cost, String energy, String hotSpot, String cogging,
+               Map<String, String> sort,
                Map<String, String> design, String editLink, String document) {
     }
 
@@ -78,18 +80,30 @@ final class SizingView {
         sort.put("cost", num(f.materialCost()));
         sort.put("energy", num(f.annualEnergyKWh().orElse(0)));
         sort.put("turns", Integer.toString(d.alternator().turnsPerCoil()));
+        sort.put("hotSpot", num(f.ratedWindingHotSpotC().orElse(0)));
+        sort.put("cogging", num(f.coggingPercentOfRatedTorque().orElse(0)));
         return new Row(d.rank(), d.layout(), d.alternator().winding().slots(), d.alternator().winding().poles(),
                 d.alternator().turnsPerCoil(), d.alternator().wire().label(),
                 d.alternator().connection().name().toLowerCase(Locale.ROOT),
                 String.format(Locale.ROOT, "%.0f rpm", f.cutInSpeedRpm()),
-                f.cutInWindSpeedMs().isPresent() ? String.format(Locale.ROOT, "%.1f m/s", f.cutInWindSpeedMs().getAsDouble()) : "",
+                f.cutInWindSpeedMs().isPresent() ? String.format(Locale.ROOT, "%.1f %s",
+                        units.show(Quantity.SPEED, f.cutInWindSpeedMs().getAsDouble()), units.symbol(Quantity.SPEED)) : "",
                 String.format(Locale.ROOT, "%.0f W", f.ratedPowerW()),
                 String.format(Locale.ROOT, "%.1f %%", 100 * f.ratedEfficiency()),
                 String.format(Locale.ROOT, "%.2f A/mm²", f.ratedCurrentDensityAPerMm2()),
                 String.format(Locale.ROOT, "%.0f V", f.openCircuitLineRmsV()),
-                String.format(Locale.ROOT, "%.2f kg", f.activeMassKg()),
+                String.format(Locale.ROOT, "%.2f %s", units.show(Quantity.MASS, f.activeMassKg()),
+                        units.symbol(Quantity.MASS)),
                 String.format(Locale.ROOT, "%.0f", f.materialCost()),
                 f.annualEnergyKWh().isPresent() ? String.format(Locale.ROOT, "%.0f kWh", f.annualEnergyKWh().getAsDouble()) : "",
+                f.ratedWindingHotSpotC().isPresent() ? String.format(Locale.ROOT, "%.0f %s",
+                        units.show(Quantity.TEMPERATURE, f.ratedWindingHotSpotC().getAsDouble()),
+                        units.symbol(Quantity.TEMPERATURE)) : "",
+                f.ratedWindingHotSpotC().isEmpty() ? "" : f.coggingPeakNm() == 0 ? "none" : f.coggingPercentOfRatedTorque().isPresent()
+                        ? String.format(Locale.ROOT, "%.1f %% (%.2f %s)", f.coggingPercentOfRatedTorque().getAsDouble(),
+                        units.show(Quantity.TORQUE, f.coggingPeakNm()), units.symbol(Quantity.TORQUE))
+                        : String.format(Locale.ROOT, "%.2f %s", units.show(Quantity.TORQUE, f.coggingPeakNm()),
+                        units.symbol(Quantity.TORQUE)),
                 sort, fields, edit, document(d, design));
     }
 

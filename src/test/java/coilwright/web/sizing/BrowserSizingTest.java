@@ -64,4 +64,64 @@ class BrowserSizingTest {
             assertEquals(tableCutIn, cutIn, "the design page finds the cut-in the sizing found");
         }
     }
+
+    /** Imperial entry, a winding-temperature limit, a hydro site ranked by energy, and a live progress bar. */
+    @Test
+    void an_installer_sizes_in_imperial_units_limits_the_heat_ranks_a_stream_and_watches_a_long_search() {
+        try (Browser browser = Browser.open()) {
+            ChromeDriver d = browser.driver();
+            d.get(APP.url("/"));
+            Browser.follow(d, d.findElement(By.linkText("Size an alternator")));
+            Browser.follow(d, d.findElement(By.linkText("imperial")));
+            assertEquals("ft", d.findElement(By.cssSelector("#rotorDiameterM ~ .unit")).getText());
+            type(d, "rotorDiameterM", "10");
+            type(d, "meanWindMs", "11");
+            type(d, "ratedWindMs", "22");
+            type(d, "cutInWindMs", "8");
+            type(d, "minPoles", "16");
+            type(d, "maxPoles", "16");
+            type(d, "minTurns", "16");
+            type(d, "maxTurns", "24");
+            type(d, "thickestAwg", "13");
+            type(d, "thinnestAwg", "13");
+            type(d, "maxWindingTempC", "320");
+            Browser.follow(d, d.findElement(By.cssSelector("#sizing-form button[type=submit]")));
+            new WebDriverWait(d, Duration.ofMinutes(4)).until(x -> !x.findElements(By.id("designs")).isEmpty());
+            assertFalse(d.findElements(By.cssSelector("#limits li[data-limit=windingTemperature]")).isEmpty());
+            WebElement first = d.findElement(By.cssSelector("#designs tbody tr.design"));
+            assertTrue(first.findElement(By.cssSelector("td.hot-spot")).getText().matches("\\d+ °F"),
+                    first.findElement(By.cssSelector("td.hot-spot")).getText());
+            assertTrue(Double.parseDouble(first.getAttribute("data-hot-spot")) <= (320 - 32) / 1.8 + 1e-9);
+
+            d.get(APP.url("/sizing?units=si"));
+            new org.openqa.selenium.support.ui.Select(d.findElement(By.id("driveType"))).selectByValue("HYDRO");
+            type(d, "minPoles", "16");
+            type(d, "maxPoles", "16");
+            type(d, "minTurns", "16");
+            type(d, "maxTurns", "24");
+            type(d, "thickestAwg", "13");
+            type(d, "thinnestAwg", "13");
+            Browser.follow(d, d.findElement(By.cssSelector("#sizing-form button[type=submit]")));
+            new WebDriverWait(d, Duration.ofMinutes(4)).until(x -> !x.findElements(By.id("designs")).isEmpty());
+            List<WebElement> rows = d.findElements(By.cssSelector("#designs tbody tr.design"));
+            assertFalse(rows.isEmpty());
+            assertTrue(Double.parseDouble(rows.get(0).getAttribute("data-energy")) > 0, "ranked by energy");
+
+            d.get(APP.url("/sizing"));
+            type(d, "discDiameterMm", "360, 390, 420");
+            type(d, "coilThicknessMm", "13, 18");
+            type(d, "minPoles", "12");
+            type(d, "maxPoles", "20");
+            type(d, "minTurns", "10");
+            type(d, "maxTurns", "120");
+            type(d, "thinnestAwg", "20");
+            type(d, "maxStrands", "3");
+            Browser.follow(d, d.findElement(By.cssSelector("#sizing-form button[type=submit]")));
+            // the script asks for the live page and moves the bar from the events
+            new WebDriverWait(d, Duration.ofSeconds(60)).until(x -> x.getCurrentUrl().endsWith("?live=1")
+                    && "true".equals(x.findElement(By.id("progress")).getAttribute("data-live")));
+            Browser.follow(d, d.findElement(By.cssSelector("#progress form button")));
+            new WebDriverWait(d, Duration.ofSeconds(60)).until(x -> !x.findElements(By.id("stopped")).isEmpty());
+        }
+    }
 }

@@ -202,6 +202,16 @@ class SizingApiTest {
         ((ObjectNode) b.get("limits")).put("maxFill", 0.9);
         assertInvalid(b, "limits.maxFill", "0.785");
         b = SizingBodies.small();
+        ((ObjectNode) b.get("limits")).put("maxWindingTempC", 300);
+        assertInvalid(b, "limits.maxWindingTempC", "250");
+        b = SizingBodies.small();
+        ((ObjectNode) b.get("limits")).put("maxCoggingPercent", 0);
+        assertInvalid(b, "limits.maxCoggingPercent", "0.1");
+        b = SizingBodies.small();
+        ((ObjectNode) b.get("limits")).put("maxCoggingPercent", "lots");
+        Response text = post(b);
+        text.then().statusCode(400).body("errors[0].field", equalTo("limits.maxCoggingPercent"));
+        b = SizingBodies.small();
         ((ObjectNode) b.get("drive")).put("type", "SteamDrive");
         Response r = post(b);
         OpenApiContract.assertMatches(r, PATH, "POST");

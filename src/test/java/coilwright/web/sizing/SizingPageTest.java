@@ -173,4 +173,107 @@ class SizingPageTest {
         assertTrue(page.error("magnetWidthMm").contains("0.002"), page.error("magnetWidthMm"));
         assertEquals("", page.error("flowLps"), "hydro fields are not read for a wind drive");
     }
+
+    @Test
+    void winding_temperature_and_cogging_limits_are_applied_and_each_design_shows_both() throws InterruptedException {
+        Map<String, String> form = small();
+        form.put("maxWindingTempC", "160");
+        form.put("maxCoggingPct", "5");
+        Html page = sized(form);
+        assertFalse(page.all("#limits li[data-limit=windingTemperature]").isEmpty(), page.all("#limits li").text());
+        assertFalse(page.all("#limits li[data-limit=cogging]").isEmpty(), page.all("#limits li").text());
+        assertTrue(page.all("#limits li[data-limit=currentDensity]").isEmpty(), "the temperature replaces the band");
+        List<Element> rows = page.all("#designs tbody tr.design");
+        assertFalse(rows.isEmpty());
+        for (Element r : rows) {
+            double hot = Double.parseDouble(r.attr("data-hot-spot"));
+            assertTrue(hot > 25 && hot <= 160, r.attr("data-hot-spot"));
+            assertTrue(r.selectFirst("td.hot-spot").text().matches("\\d+ °C"), r.selectFirst("td.hot-spot").text());
+            assertEquals("none", r.selectFirst("td.cogging").text(), "air-cored coils do not cog");
+        }
+        form.put("maxWindingTempC", "500");
+        form.put("maxCoggingPct", "-1");
+        Html bad = Html.of(given().formParams(form).post("/sizing").then().statusCode(400).extract().response());
+        assertTrue(bad.error("maxWindingTempC").contains("40") && bad.error("maxWindingTempC").contains("250"),
+                bad.error("maxWindingTempC"));
+        assertTrue(bad.error("maxCoggingPct").contains("maxCoggingPercent"), bad.error("maxCoggingPct"));
+    }
+
+    @Test
+    void imperial_entry_is_converted_at_the_edge_and_the_switch_keeps_what_was_typed() throws InterruptedException {
+        Html form = Html.of(given().get("/sizing?units=imperial").then().statusCode(200).extract().response());
+        assertEquals("ft", form.unit("rotorDiameterM"));
+        assertEquals("mph", form.unit("meanWindMs"));
+        assertEquals("US gpm", form.unit("flowLps"));
+        assertEquals("in", form.unit("magnetWidthMm"));
+        assertEquals("per lb", form.unit("copperPrice"));
+        assertEquals(3 / 0.3048, Double.parseDouble(form.value("rotorDiameterM")), 1e-3, "3 m in feet");
+        assertEquals(5 / 0.44704, Double.parseDouble(form.value("meanWindMs")), 1e-3, "5 m/s in mph");
+        String switched = form.all(".units-switch a").stream().filter(a -> a.text().equals("SI")).findFirst()
+                .orElseThrow().attr("href");
+        Html back = Html.of(given().urlEncodingEnabled(false).get(switched).then().statusCode(200).extract().response());
+        assertEquals(3, Double.parseDouble(back.value("rotorDiameterM")), 1e-3, "back in metres");
+
+        Map<String, String> imperial = small();
+        imperial.putAll(Map.of("rotorDiameterM", "10", "meanWindMs", "11", "ratedWindMs", "22", "cutInWindMs", "8",
+                "discDiameterMm", "15.35", "coilThicknessMm", "0.63", "magnetWidthMm", "1.575",
+                "magnetLengthMm", "1.97", "magnetThicknessMm", "0.394", "cableLengthM", "100"));
+        Response r = given().redirects().follow(false).queryParam("units", "imperial").formParams(imperial)
+                .post("/sizing");
+        assertEquals(200, r.statusCode(), r.asString());
+        Html page = Html.of(r);
+        assertFalse(page.all("#designs tbody tr.design").isEmpty());
+        assertTrue(page.all("ul.notes li").stream().anyMatch(li -> li.text().startsWith("Rated wind 22 mph is taken as "
+                + "10.0 m/s")), page.all("ul.notes li").text());
+        assertTrue(page.all("#designs td.cut-in").first().text().matches("\\d+ rpm \\d+\\.\\d mph"),
+                page.all("#designs td.cut-in").first().text());
+        imperial.put("rotorDiameterM", "-10");
+        Html bad = Html.of(given().queryParam("units", "imperial").formParams(imperial).post("/sizing").then()
+                .statusCode(400).extract().response());
+        assertTrue(bad.error("rotorDiameterM").startsWith("-10 ft is out of range"), bad.error("rotorDiameterM"));
+    }
+
+    @Test
+    void a_hydro_site_ranks_by_the_energy_of_its_flow_duration_curve() throws InterruptedException {
+        Map<String, String> form = small();
+        form.put(SizingForm.DRIVE, "HYDRO");
+        form.put("objective", "ANNUAL_ENERGY");
+        Html page = sized(form);
+        List<Element> rows = page.all("#designs tbody tr.design");
+        assertFalse(rows.isEmpty(), page.text());
+        double previous = Double.POSITIVE_INFINITY;
+        for (Element r : rows) {
+            double energy = Double.parseDouble(r.attr("data-energy"));
+            assertTrue(energy > 0 && energy <= previous, "best energy first: " + energy);
+            previous = energy;
+        }
+        form.put("flowDuration", "");
+        Html none = Html.of(given().formParams(form).post("/sizing").then().statusCode(400).extract().response());
+        assertTrue(none.error("objective").contains("flow-duration"), none.error("objective"));
+        form.put("flowDuration", "30@0, 15@30, 20@60");
+        Html rising = Html.of(given().formParams(form).post("/sizing").then().statusCode(400).extract().response());
+        assertTrue(rising.error("flowDuration").contains("flowDuration[2].flowM3s"), rising.error("flowDuration"));
+        form.put("flowDuration", "thirty at noon");
+        Html unread = Html.of(given().formParams(form).post("/sizing").then().statusCode(400).extract().response());
+        assertTrue(unread.error("flowDuration").contains("flow@percent"), unread.error("flowDuration"));
+    }
+
+    @Test
+    void the_progress_page_follows_the_events_with_a_script_of_its_own_and_refreshes_without_one() {
+        Map<String, String> form = new HashMap<>(SizingForm.defaults());
+        form.putAll(Map.of("discDiameterMm", "360, 390, 420", "coilThicknessMm", "13, 18", "minPoles", "12",
+                "maxPoles", "20", "minTurns", "10", "maxTurns", "120", "thinnestAwg", "20", "maxStrands", "3"));
+        String job = given().redirects().follow(false).formParams(form).post("/sizing").then().statusCode(303)
+                .extract().header("Location");
+        Response plain = given().get(job);
+        assertEquals("2", plain.header("Refresh"));
+        Html page = Html.of(plain);
+        assertEquals(job.substring(job.lastIndexOf('/') + 1), page.id("progress").attr("data-job"));
+        assertFalse(page.all("script[src=/static/js/sizing-progress.js]").isEmpty());
+        Response live = given().get(job + "?live=1");
+        assertEquals(null, live.header("Refresh"), "the script follows the events instead");
+        String script = given().get("/static/js/sizing-progress.js").then().statusCode(200).extract().asString();
+        assertTrue(script.contains("/api/v1/sizing/jobs/") && script.contains("EventSource"), "served by the service");
+        given().redirects().follow(false).post(job + "/cancel").then().statusCode(303);
+    }
 }
