@@ -71,8 +71,8 @@ final class LimitAudit {
                 case "ratedPower" -> -rated.powerToLoadW();
                 case "currentDensity" -> rated.currentDensityAPerMm2();
                 case "efficiency" -> -rated.efficiency();
-                case "windingTemperature" -> HeatAssessment.assess(alt, load, List.of(rated.speedRpm()),
-                        rated.speedRpm(), rated.speedRpm()).rated().windingHotSpotC();
+                case "windingTemperature" -> HeatAssessment.assess(alt, load, List.of(rated), rated,
+                        rated.speedRpm()).rated().windingHotSpotC();
                 case "cogging" -> 100 * HeatAssessment.cogging(alt).peakNm() / rated.shaftTorqueNm();
                 default -> throw new AssertionError("unknown limit " + l.limit());
             };
