@@ -81,6 +81,13 @@ public final class Browser implements AutoCloseable {
         follow(d, d.findElement(By.cssSelector(css)));
     }
 
+    /** Replaces what the field with this id holds by the text, as a user types it. */
+    public static void type(WebDriver d, String fieldId, String text) {
+        WebElement input = d.findElement(By.id(fieldId));
+        input.clear();
+        input.sendKeys(text);
+    }
+
     public ChromeDriver driver() {
         return driver;
     }

@@ -1,5 +1,6 @@
 package coilwright.web;
 
+import static coilwright.web.Browser.type;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -37,12 +38,6 @@ class BrowserJourneyTest {
     @RegisterExtension
     static final TestApp APP = new TestApp();
     private static final int PHONE_WIDTH_PX = 390;
-
-    private static void type(ChromeDriver d, String field, String text) {
-        WebElement input = d.findElement(By.id(field));
-        input.clear();
-        input.sendKeys(text);
-    }
 
     /** Every click in these journeys loads a page; the next step waits for it. */
     private static void click(ChromeDriver d, String css) {

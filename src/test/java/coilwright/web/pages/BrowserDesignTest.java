@@ -1,5 +1,6 @@
 package coilwright.web.pages;
 
+import static coilwright.web.Browser.type;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
@@ -27,12 +28,6 @@ import org.junit.jupiter.api.Tag;
 class BrowserDesignTest {
     @RegisterExtension
     static final TestApp APP = new TestApp();
-
-    private static void type(ChromeDriver d, String field, String text) {
-        WebElement input = d.findElement(By.id(field));
-        input.clear();
-        input.sendKeys(text);
-    }
 
     private static void choose(ChromeDriver d, String field, String visibleText) {
         new Select(d.findElement(By.id(field))).selectByVisibleText(visibleText);

@@ -1,5 +1,7 @@
 package coilwright.web.sizing;
 
+import static coilwright.web.Browser.type;
+
 import coilwright.web.Browser;
 import coilwright.web.TestApp;
 import org.junit.jupiter.api.Tag;
@@ -23,10 +25,14 @@ class BrowserSizingTest {
     @RegisterExtension
     static final TestApp APP = new TestApp();
 
-    private static void type(ChromeDriver d, String field, String text) {
-        WebElement input = d.findElement(By.id(field));
-        input.clear();
-        input.sendKeys(text);
+    /** 16 poles, 16 to 24 turns, AWG 13 only: a search that ends in seconds. */
+    private static void narrowTheSearch(ChromeDriver d) {
+        type(d, "minPoles", "16");
+        type(d, "maxPoles", "16");
+        type(d, "minTurns", "16");
+        type(d, "maxTurns", "24");
+        type(d, "thickestAwg", "13");
+        type(d, "thinnestAwg", "13");
     }
 
     @Test
@@ -37,12 +43,7 @@ class BrowserSizingTest {
             Browser.follow(d, d.findElement(By.linkText("Size an alternator")));
             type(d, "rotorDiameterM", "3");
             type(d, "batteryV", "24");
-            type(d, "minPoles", "16");
-            type(d, "maxPoles", "16");
-            type(d, "minTurns", "16");
-            type(d, "maxTurns", "24");
-            type(d, "thickestAwg", "13");
-            type(d, "thinnestAwg", "13");
+            narrowTheSearch(d);
             d.findElement(By.cssSelector("#sizing-form button[type=submit]")).click();
             // inline, or through the progress page that refreshes itself until the designs are ready
             new WebDriverWait(d, Duration.ofMinutes(4)).until(x -> !x.findElements(By.id("designs")).isEmpty());
@@ -78,12 +79,7 @@ class BrowserSizingTest {
             type(d, "meanWindMs", "11");
             type(d, "ratedWindMs", "22");
             type(d, "cutInWindMs", "8");
-            type(d, "minPoles", "16");
-            type(d, "maxPoles", "16");
-            type(d, "minTurns", "16");
-            type(d, "maxTurns", "24");
-            type(d, "thickestAwg", "13");
-            type(d, "thinnestAwg", "13");
+            narrowTheSearch(d);
             type(d, "maxWindingTempC", "320");
             Browser.follow(d, d.findElement(By.cssSelector("#sizing-form button[type=submit]")));
             new WebDriverWait(d, Duration.ofMinutes(4)).until(x -> !x.findElements(By.id("designs")).isEmpty());
@@ -95,12 +91,7 @@ class BrowserSizingTest {
 
             d.get(APP.url("/sizing?units=si"));
             new org.openqa.selenium.support.ui.Select(d.findElement(By.id("driveType"))).selectByValue("HYDRO");
-            type(d, "minPoles", "16");
-            type(d, "maxPoles", "16");
-            type(d, "minTurns", "16");
-            type(d, "maxTurns", "24");
-            type(d, "thickestAwg", "13");
-            type(d, "thinnestAwg", "13");
+            narrowTheSearch(d);
             Browser.follow(d, d.findElement(By.cssSelector("#sizing-form button[type=submit]")));
             new WebDriverWait(d, Duration.ofMinutes(4)).until(x -> !x.findElements(By.id("designs")).isEmpty());
             List<WebElement> rows = d.findElements(By.cssSelector("#designs tbody tr.design"));
