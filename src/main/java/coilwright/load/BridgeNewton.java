@@ -13,6 +13,7 @@ final class BridgeNewton {
     private static final int MAX_DAMPED_NEWTON = 80;
     private static final double NEWTON_TOLERANCE = 1e-13;
     private static final double ACCEPT_TOLERANCE = 1e-9;
+    private static final int MAX_POLISH_STEPS = 3;
 
     private final BridgeModel model;
     private final double anchorS;
@@ -36,9 +37,12 @@ final class BridgeNewton {
         for (int it = 0; it < maxSteps; it++) {
             double size = Math.max(norm(y), 1e-3 * scale);
             double noise = BridgeSolver.NOISE_TOLERANCE * r.trace.coefficientMagnitudeA;
-            if (norm(r.value) <= Math.max(NEWTON_TOLERANCE * size, noise)
-                    || it >= maxSteps / 2 && norm(r.value) <= Math.max(ACCEPT_TOLERANCE * size, noise)) {
+            if (norm(r.value) <= NEWTON_TOLERANCE * size) {
                 return r.trace;
+            }
+            if (norm(r.value) <= noise
+                    || it >= maxSteps / 2 && norm(r.value) <= Math.max(ACCEPT_TOLERANCE * size, noise)) {
+                return polished(r).trace;
             }
             double[][] jac = finite(r.jacobian) ? r.jacobian : finiteDifferenceJacobian(model, anchorS, y, r.value, size);
             double[] step = solveSmall(jac, r.value);
@@ -70,6 +74,35 @@ final class BridgeNewton {
         }
         throw new NoPeriodicSolution("no periodic solution after " + maxSteps
                 + " Newton steps (residual " + norm(r.value) + " A)");
+    }
+
+    /**
+     * Full Newton steps from a state accepted at the trace's rounding-noise floor, kept while they shrink the
+     * residual (at most {@link #MAX_POLISH_STEPS}). The noise floor is an estimate from the waveform's largest
+     * coefficient; where that coefficient is thousands of times the current (a large reactance over a tiny
+     * resistance near cut-in), the state it accepts can still be improved, and the energy balance shows it.
+     */
+    private Residual polished(Residual r) {
+        for (int k = 0; k < MAX_POLISH_STEPS; k++) {
+            double[][] jac = finite(r.jacobian) ? r.jacobian : null;
+            if (jac == null) {
+                return r;
+            }
+            double[] step = solveSmall(jac, r.value);
+            if (!finite(step)) {
+                return r;
+            }
+            double[] yt = r.y.clone();
+            for (int i = 0; i < yt.length; i++) {
+                yt[i] -= step[i];
+            }
+            Residual trial = new Residual(model, anchorS, yt);
+            if (!(norm(trial.value) < norm(r.value))) {
+                return r;
+            }
+            r = trial;
+        }
+        return r;
     }
 
     /** The exact Jacobian of the residual at y (anchor time anchorS). */
