@@ -57,13 +57,22 @@ public final class RewindPlanner {
                 rewinds.addAll(rewinds(machine, ch, target, conn, paths, wantedKe));
             }
         }
-        reconnections.sort(Comparator.comparingLong((Reconnection r) -> rankKey(r.relativeDeviation()))
+        // a closed delta in which the third harmonic circulates heats the winding with no output: every such option
+        // ranks behind every star one, however close it comes to the target
+        reconnections.sort(Comparator.comparing((Reconnection r) -> circulates(ch, r.connection()))
+                .thenComparingLong(r -> rankKey(r.relativeDeviation()))
                 .thenComparing(r -> !r.unchanged()).thenComparingInt(Reconnection::parallelPaths));
-        rewinds.sort(Comparator.comparingLong((RewindOption r) -> rankKey(r.relativeDeviation()))
+        rewinds.sort(Comparator.comparing((RewindOption r) -> circulates(ch, r.connection()))
+                .thenComparingLong(r -> rankKey(r.relativeDeviation()))
                 .thenComparing(r -> r.connection() != machine.connection())
                 .thenComparing(r -> r.parallelPaths() != machine.parallelPaths())
                 .thenComparingInt(RewindOption::parallelPaths));
         List<String> notes = List.of(
+                String.format(Locale.ROOT, "ranking: closest to the target first; %s",
+                        circulates(ch, Connection.DELTA) ? String.format(Locale.ROOT, "delta options come after every "
+                                + "star option, because the layout's third harmonic (kw3 %.3f) circulates in a closed "
+                                + "delta", ch.thirdHarmonicWindingFactor())
+                                : "then the present connection and paths, then fewer parallel paths"),
                 "Ke of every option scales the measured Ke: the EMF per turn stays, only the turns in series change",
                 String.format(Locale.ROOT, "predicted Ke, voltages and cut-in speeds carry the +-%.1f %% of the measured Ke",
                         100 * ch.keLineRmsVPerRpm().relativeUncertainty()),
@@ -81,6 +90,11 @@ public final class RewindPlanner {
                         BandTemperature.REFERENCE_RISE_K, ASSUMED_AMBIENT_C));
         return new RewindPlan(ch, target, wantedKe, ch.keLineRmsVPerRpm().relativeUncertainty(), reconnections,
                 rewinds, notes);
+    }
+
+    /** True for a delta connection of a layout whose third-harmonic EMF would drive a circulating current. */
+    static boolean circulates(MachineCharacterisation ch, Connection conn) {
+        return conn == Connection.DELTA && ch.thirdHarmonicWindingFactor() > DELTA_KW3_CAUTION;
     }
 
     /**
@@ -165,7 +179,7 @@ public final class RewindPlanner {
     }
 
     private static List<String> notes(MachineCharacterisation ch, Connection conn) {
-        if (conn == Connection.DELTA && ch.thirdHarmonicWindingFactor() > DELTA_KW3_CAUTION) {
+        if (circulates(ch, conn)) {
             return List.of(String.format(Locale.ROOT, "delta: the winding's third-harmonic factor is %.3f, so a"
                     + " third-harmonic EMF would drive a current round the closed delta (heat and drag with no output);"
                     + " check the no-load current in the closed delta", ch.thirdHarmonicWindingFactor()));

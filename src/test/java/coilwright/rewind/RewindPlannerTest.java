@@ -191,6 +191,30 @@ class RewindPlannerTest {
     }
 
     @Test
+    void a_delta_in_which_the_third_harmonic_circulates_ranks_behind_every_star_option() {
+        // the same 36-slot, 4-pole full-pitch layout (kw3 = 0.667); 120 V at 1500 rpm is met within rounding by
+        // star and by delta regroupings alike, so only the rule decides
+        ExistingMachine m = new ExistingMachine(36, 4, 3, Layers.DOUBLE, 0, Connection.STAR, 0, 1, 20,
+                WireSpec.awg(16, 2), null, Measurements.of(200, 1500, 50, 1.0, 20));
+        RewindPlan plan = RewindPlanner.plan(m, RewindTarget.lineVoltage(120 * Math.sqrt(3), 1500, 1500));
+        List<Connection> reconnections = plan.reconnections().stream().map(Reconnection::connection).toList();
+        List<Connection> rewinds = plan.rewinds().stream().map(RewindOption::connection).toList();
+        assertTrue(reconnections.contains(Connection.DELTA) && rewinds.contains(Connection.DELTA));
+        assertEquals(reconnections.stream().sorted().toList(), reconnections, "star (declared first) before delta");
+        assertEquals(rewinds.stream().sorted().toList(), rewinds, "star (declared first) before delta");
+        assertTrue(plan.notes().get(0).contains("after every star option"), plan.notes().get(0));
+
+        // a layout without a third harmonic to circulate (kw3 below 0.01) ranks by closeness alone
+        ExistingMachine clean = new ExistingMachine(36, 4, 3, Layers.DOUBLE, 6, Connection.STAR, 0, 1, 20,
+                WireSpec.awg(16, 2), null, Measurements.of(200, 1500, 50, 1.0, 20));
+        RewindPlan cleanPlan = RewindPlanner.plan(clean, RewindTarget.lineVoltage(120 * Math.sqrt(3), 1500, 1500));
+        // two-thirds pitch (6 of 9 slots) cancels the third harmonic: kp3 = sin(3 x 60 deg) = 0
+        assertTrue(cleanPlan.characterisation().thirdHarmonicWindingFactor() <= RewindPlanner.DELTA_KW3_CAUTION);
+        assertSorted(cleanPlan.reconnections().stream().map(Reconnection::relativeDeviation).toList());
+        assertTrue(cleanPlan.notes().get(0).contains("fewer parallel paths"), cleanPlan.notes().get(0));
+    }
+
+    @Test
     void missing_machine_or_target_is_refused() {
         InvalidInputException e = assertThrows(InvalidInputException.class, () -> RewindPlanner.plan(null, null));
         assertEquals(List.of("machine", "target"), e.errors().stream().map(f -> f.field()).toList());
